@@ -1,0 +1,75 @@
+/**
+ * `npm start`: PostgreSQL up, schema migrated, demo seeded when the database is
+ * empty, a production build made when there is none, then the app served on
+ * 127.0.0.1 (PORT overrides 3000). `--dev` serves with hot reload instead;
+ * `--rebuild` forces a fresh build. Ctrl-C stops everything it started.
+ */
+import { spawn, spawnSync } from "node:child_process";
+import { existsSync } from "node:fs";
+import { join } from "node:path";
+import { db, localEnv, root } from "./env.mjs";
+
+const dev = process.argv.includes("--dev");
+const rebuild = process.argv.includes("--rebuild");
+
+function step(label, cmd, args, env) {
+  process.stdout.write(`• ${label}\n`);
+  const r = spawnSync(cmd, args, { cwd: root, env, stdio: "inherit" });
+  if (r.status !== 0) {
+    console.error(`\n✗ ${label} failed (exit ${r.status ?? r.signal}). See the messages above.`);
+    process.exit(1);
+  }
+}
+
+process.stdout.write("• starting PostgreSQL on 127.0.0.1\n");
+const dbWasRunning = spawnSync("bash", [join(root, "scripts/db.sh"), "status"], { stdio: "ignore" }).status === 0;
+try {
+  db("start");
+} catch {
+  console.error("✗ PostgreSQL could not be started (see above).");
+  process.exit(1);
+}
+const env = localEnv();
+const bin = (name) => join(root, "node_modules/.bin", name);
+
+step("migrating the database", bin("tsx"), ["scripts/migrate.ts"], env);
+step("seeding the demo if the database is empty", bin("tsx"), ["--conditions=react-server", "scripts/seed.ts", "--if-empty"], env);
+if (!dev && (rebuild || !existsSync(join(root, ".next/BUILD_ID")))) {
+  step("building the app (first start takes a minute or two)", "npm", ["run", "-s", "build"], { ...env, NODE_ENV: "production" });
+}
+
+const port = env.PORT;
+const args = dev ? ["dev", "--turbopack", "-H", "127.0.0.1", "-p", port] : ["start", "-H", "127.0.0.1", "-p", port];
+const server = spawn(bin("next"), args, { cwd: root, env, stdio: ["ignore", "pipe", "inherit"] });
+let announced = false;
+server.stdout.on("data", (chunk) => {
+  process.stdout.write(chunk);
+  if (!announced && /ready|started|Local:/i.test(String(chunk))) {
+    announced = true;
+    spawnSync(bin("tsx"), ["--conditions=react-server", "scripts/seed.ts", "--print-only"], { cwd: root, env, stdio: "inherit" });
+    console.log(`\nIronquill is running at http://localhost:${port}  (Ctrl-C to stop)\n`);
+  }
+});
+
+let stopping = false;
+function stop(signal) {
+  if (stopping) return;
+  stopping = true;
+  console.log(`\nstopping (${signal})…`);
+  server.kill("SIGTERM");
+  setTimeout(() => server.kill("SIGKILL"), 5000).unref();
+}
+process.on("SIGINT", () => stop("SIGINT"));
+process.on("SIGTERM", () => stop("SIGTERM"));
+server.on("exit", (code) => {
+  // Leave PostgreSQL as we found it: stop it only if this command started it.
+  if (!dbWasRunning) {
+    try {
+      db("stop");
+    } catch {
+      console.error("PostgreSQL did not stop cleanly; `npm run db stop` tries again.");
+    }
+  }
+  console.log(stopping ? "stopped." : `the server exited (${code}).`);
+  process.exit(stopping ? 0 : (code ?? 1));
+});
