@@ -1,16 +1,12 @@
 /**
- * Applies db/migrations/* in name order. Used by scripts/migrate.ts and by the
+ * Applies db/migrations in name order. Used by scripts/migrate.ts and by the
  * integration tests (which migrate a fresh database).
  */
-import { promises as fs } from "node:fs";
-import path from "node:path";
-import { fileURLToPath } from "node:url";
-import { FileMigrationProvider, type Kysely, Migrator } from "kysely";
-
-const folder = path.join(path.dirname(fileURLToPath(import.meta.url)), "migrations");
+import { type Kysely, Migrator } from "kysely";
+import { migrations } from "./migrations";
 
 export function migrator(db: Kysely<any>): Migrator {
-  return new Migrator({ db, provider: new FileMigrationProvider({ fs, path, migrationFolder: folder }) });
+  return new Migrator({ db, provider: { getMigrations: async () => migrations } });
 }
 
 /** Runs pending migrations; returns the names applied, throws with the failing name on error. */

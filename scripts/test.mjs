@@ -2,7 +2,7 @@
  * `npm test`: every test, against real services.
  *  1. PostgreSQL up (and Debian's chromium installed when root and missing);
  *  2. a test database recreated from nothing, migrated and seeded;
- *  3. Vitest: unit tests and integration tests against that database;
+ *  3. a type check of the whole tree, then Vitest: unit tests and integration tests against that database;
  *  4. a production build (in .next-test) and Playwright in /usr/bin/chromium.
  * Ends with one line `N passed, N failed` summing both runners; exits 1 on any failure.
  */
@@ -66,6 +66,10 @@ env.NEXTAUTH_URL = `http://127.0.0.1:${env.E2E_PORT}`;
 let setupFailed = 0;
 if (run("migrating the test database", bin("tsx"), ["scripts/migrate.ts"], env) !== 0) setupFailed++;
 if (run("seeding the test database", bin("tsx"), ["--conditions=react-server", "scripts/seed.ts"], env) !== 0) setupFailed++;
+
+// The whole tree type-checks (the build below only checks what the app imports).
+if (run("type check (tsc)", bin("tsc"), ["--noEmit", "-p", "."], env) === 0) passed += 1;
+else failed += 1;
 
 // Vitest
 rmSync(join(results, "vitest.json"), { force: true });

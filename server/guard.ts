@@ -1,18 +1,18 @@
 import "server-only";
-import { redirect } from "next/navigation";
+import { forbidden, redirect } from "next/navigation";
 import type { Role } from "@/db/database";
 import { AppError } from "./errors";
 import { getViewer, type Viewer } from "./auth";
 
 /**
- * For server components and layouts: the viewer when their role is allowed;
- * anonymous visitors go to sign-in, signed-in people with another role get
- * `{ forbidden: true }` so the page can say so plainly.
+ * For server components and layouts: the viewer when their role is allowed.
+ * Anonymous visitors go to sign-in; a signed-in person with another role gets
+ * the 403 page (app/forbidden.tsx).
  */
-export async function pageViewer(roles: Role[], from: string): Promise<Viewer | { forbidden: true; viewer: Viewer }> {
+export async function pageViewer(roles: Role[], from: string): Promise<Viewer> {
   const viewer = await getViewer();
   if (!viewer) redirect(`/signin?callbackUrl=${encodeURIComponent(from)}`);
-  if (!roles.includes(viewer.role)) return { forbidden: true, viewer };
+  if (!roles.includes(viewer.role)) forbidden();
   return viewer;
 }
 

@@ -1,10 +1,9 @@
 import type { ReactNode } from "react";
-import { AppShell, Forbidden } from "@/components/AppShell";
+import { AppShell } from "@/components/AppShell";
 import { pageViewer } from "@/server/guard";
 
 export default async function AthleteLayout({ children }: { children: ReactNode }) {
   const viewer = await pageViewer(["athlete"], "/athlete");
-  if ("forbidden" in viewer) return <Forbidden area="athlete area" />;
   return (
     <AppShell area="athlete" viewerName={viewer.name} nav={[{ href: "/athlete", label: "Today" }]}>
       {children}

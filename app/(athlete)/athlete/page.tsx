@@ -7,7 +7,6 @@ export const metadata = { title: "Today" };
 
 export default async function AthleteToday() {
   const viewer = await pageViewer(["athlete"], "/athlete");
-  if ("forbidden" in viewer) return null;
   const today = new Intl.DateTimeFormat("en-GB", { weekday: "long", day: "numeric", month: "long", timeZone: "UTC" }).format(new Date());
   return (
     <>

@@ -45,7 +45,7 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
         <input id="password" name="password" type="password" autoComplete="current-password" required className="field-input" />
       </div>
       {error ? (
-        <p role="alert" className="rounded-md bg-ember-50 px-3 py-2 text-sm text-ember-700">
+        <p role="alert" data-testid="form-error" className="rounded-md bg-ember-50 px-3 py-2 text-sm text-ember-700">
           {error}
         </p>
       ) : null}

@@ -28,7 +28,7 @@ export function SignUpForm() {
       <Field id="email" label="E-mail" type="email" autoComplete="email" defaultValue={state.values.email} error={state.fields.email} />
       <Field id="password" label="Password" type="password" autoComplete="new-password" hint="At least 10 characters." error={state.fields.password} />
       {state.message && !state.ok ? (
-        <p role="alert" className="rounded-md bg-ember-50 px-3 py-2 text-sm text-ember-700">
+        <p role="alert" data-testid="form-error" className="rounded-md bg-ember-50 px-3 py-2 text-sm text-ember-700">
           {state.message}
         </p>
       ) : null}

@@ -8,7 +8,6 @@ export const metadata = { title: "Athletes" };
 
 export default async function AthletesPage() {
   const viewer = await pageViewer(["coach"], "/coach/athletes");
-  if ("forbidden" in viewer) return null;
   const athletes = await listAthletesOfCoach(getDb(), viewer.id);
   return (
     <>

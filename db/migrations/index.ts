@@ -1,0 +1,10 @@
+/**
+ * Every migration, in order. Listed by hand (not read from disk) so that the
+ * app bundle, tsx and Vitest all load them the same way. Add new files at the end.
+ */
+import type { Migration } from "kysely";
+import * as m0001 from "./2026-12-01T0001_users";
+
+export const migrations: Record<string, Migration> = {
+  "2026-12-01T0001_users": m0001,
+};

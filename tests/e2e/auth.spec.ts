@@ -1,0 +1,89 @@
+import { expect, test } from "@playwright/test";
+import { signIn } from "./support";
+
+test("an anonymous visitor who opens the coach desk is sent to sign in, and back after", async ({ page }) => {
+  await page.goto("/coach/athletes");
+  await expect(page).toHaveURL(/\/signin\?callbackUrl=%2Fcoach%2Fathletes/);
+  await page.getByLabel("E-mail").fill("coach@larchmere.test");
+  await page.getByLabel("Password").fill("lift-heavy-2027");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page).toHaveURL(/\/coach\/athletes$/);
+  await expect(page.getByRole("heading", { name: "Athletes" })).toBeVisible();
+});
+
+test("a new coach signs up, lands on the coach desk, and the session carries the coach role", async ({ page }) => {
+  const email = `coach-${Date.now()}@example.test`;
+  await page.goto("/signup");
+  await page.getByLabel("Your name").fill("Ada Example");
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill("a-long-enough-secret");
+  await page.getByRole("button", { name: "Create coach account" }).click();
+  await expect(page).toHaveURL(/\/coach$/);
+  await expect(page.getByRole("heading", { name: /Good to see you, Ada/ })).toBeVisible();
+
+  const session = await (await page.request.get("/api/auth/session")).json();
+  expect(session.user.email).toBe(email);
+  expect(session.user.role).toBe("coach");
+
+  // Signing out and in again with the same details works.
+  await page.getByRole("button", { name: "Sign out" }).click();
+  await expect(page).toHaveURL(/\/$/);
+  await signIn(page, email, "a-long-enough-secret");
+  await expect(page).toHaveURL(/\/coach$/);
+});
+
+test("sign-up with a taken e-mail or a short password explains each field", async ({ page }) => {
+  await page.goto("/signup");
+  await page.getByLabel("Your name").fill("Rowan Again");
+  await page.getByLabel("E-mail").fill("coach@larchmere.test");
+  await page.getByLabel("Password").fill("short");
+  await page.getByRole("button", { name: "Create coach account" }).click();
+  await expect(page.getByText("Use at least 10 characters")).toBeVisible();
+  await page.getByLabel("Password").fill("long-enough-password");
+  await page.getByRole("button", { name: "Create coach account" }).click();
+  await expect(page.getByText("Already registered — sign in instead")).toBeVisible();
+  await expect(page.getByLabel("Your name")).toHaveValue("Rowan Again");
+});
+
+test("a bad sign-in shows a clear message and never an error page", async ({ page }) => {
+  const responses: number[] = [];
+  page.on("response", (r) => responses.push(r.status()));
+  await page.goto("/signin");
+  await page.getByLabel("E-mail").fill("coach@larchmere.test");
+  await page.getByLabel("Password").fill("not-the-password");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page.getByTestId("form-error")).toHaveText(/don't match an account/);
+  await expect(page).toHaveURL(/\/signin/);
+  expect(responses.filter((s) => s >= 500)).toEqual([]);
+});
+
+test("a coach cannot open the admin area", async ({ page }) => {
+  await signIn(page, "coach@larchmere.test");
+  const res = await page.goto("/admin");
+  expect(res?.status()).toBe(403);
+  await expect(page.getByTestId("forbidden")).toBeVisible();
+  await expect(page.getByRole("table")).toHaveCount(0);
+});
+
+test("an athlete cannot open the coach desk, an admin sees every account", async ({ browser }) => {
+  const athlete = await browser.newPage();
+  await signIn(athlete, "tomas@larchmere.test");
+  await expect(athlete).toHaveURL(/\/athlete$/);
+  expect((await athlete.goto("/coach"))?.status()).toBe(403);
+  await athlete.close();
+
+  const admin = await browser.newPage();
+  await signIn(admin, "admin@larchmere.test");
+  await expect(admin).toHaveURL(/\/admin$/);
+  await expect(admin.getByRole("cell", { name: "coach@larchmere.test" })).toBeVisible();
+  await admin.close();
+});
+
+test("/api/health reports the app and the database", async ({ request }) => {
+  const res = await request.get("/api/health");
+  expect(res.status()).toBe(200);
+  const body = await res.json();
+  expect(body.app.ok).toBe(true);
+  expect(body.database.ok).toBe(true);
+  expect(typeof body.database.latencyMs).toBe("number");
+});
