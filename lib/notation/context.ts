@@ -1,0 +1,74 @@
+/**
+ * Shared state while turning a syntax tree into a programme: the source text,
+ * the diagnostics gathered so far and small helpers to read nodes.
+ *
+ * @example
+ * const ctx = new BuildContext("title: x");
+ * ctx.report(0, 5, "warning", "just an example");
+ * ctx.diagnostics.length; // 1
+ */
+import type { SyntaxNode } from "@lezer/common";
+import type { Severity, Diagnostic } from "./model";
+import { firstErrorFrom } from "./lines";
+import { SourceText } from "./source";
+import type { Problem, Read } from "./values";
+
+export class BuildContext {
+  readonly src: SourceText;
+  readonly diagnostics: Diagnostic[] = [];
+
+  /** Start of the first error in the line being read: what the parser guessed after it is not trusted. */
+  private cutoff = Infinity;
+
+  constructor(text: string) {
+    this.src = new SourceText(text);
+  }
+
+  /** Begin reading a line node: note where its first syntax error starts. */
+  enterLine(node: SyntaxNode): void {
+    this.cutoff = firstErrorFrom(node);
+  }
+
+  /** A node really written before any error (not a token the parser made up to recover). */
+  usable(node: SyntaxNode): boolean {
+    return !node.type.isError && node.to > node.from && node.from < this.cutoff;
+  }
+
+  child(node: SyntaxNode, name: string): SyntaxNode | null {
+    for (const c of node.getChildren(name)) if (this.usable(c)) return c;
+    return null;
+  }
+
+  children(node: SyntaxNode, name: string): SyntaxNode[] {
+    return node.getChildren(name).filter((c) => this.usable(c));
+  }
+
+  text(node: { from: number; to: number }): string {
+    return this.src.text.slice(node.from, node.to);
+  }
+
+  line(node: { from: number }): number {
+    return this.src.lineOf(node.from);
+  }
+
+  report(from: number, to: number, severity: Severity, message: string): void {
+    this.diagnostics.push(this.src.diagnostic(from, to, severity, message));
+  }
+
+  /** Report a reader's problems (positioned inside `node`) and hand back its value. */
+  take<T>(node: { from: number }, read: Read<T>): T | null {
+    for (const p of read.problems) this.reportProblem(node.from, p);
+    return read.value;
+  }
+
+  reportProblem(base: number, p: Problem): void {
+    this.report(base + p.offset, base + p.offset + p.length, p.severity, p.message);
+  }
+
+  /** Words of a name node joined by single spaces (the source may use several). */
+  words(node: SyntaxNode): string {
+    const out: string[] = [];
+    for (let c = node.firstChild; c; c = c.nextSibling) if (this.usable(c) && c.name !== "Comment") out.push(this.text(c));
+    return out.join(" ");
+  }
+}
