@@ -38,10 +38,13 @@ async function main(argv: string[]): Promise<number> {
   return mod.run(rest);
 }
 
+// exitCode rather than exit(): exit() would cut off output still queued for a pipe.
 main(process.argv.slice(2)).then(
-  (code) => process.exit(code),
+  (code) => {
+    process.exitCode = code;
+  },
   (err: unknown) => {
     console.error(`iq: internal error: ${err instanceof Error ? err.message : String(err)}`);
-    process.exit(2);
+    process.exitCode = 2;
   },
 );

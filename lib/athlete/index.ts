@@ -1,0 +1,7 @@
+/**
+ * Athlete profiles.
+ * @example
+ * import { parseAthleteProfile } from "../athlete";
+ * parseAthleteProfile(JSON.parse(text));
+ */
+export * from "./profile";
