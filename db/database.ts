@@ -3,6 +3,7 @@
  * `T | null`, never optional, so every insert states what it leaves empty.
  */
 import type { ColumnType, Generated } from "kysely";
+import type { Programme } from "../lib/notation/model";
 
 export type Role = "admin" | "coach" | "athlete";
 
@@ -28,7 +29,62 @@ export interface UsersTable {
   created_at: CreatedAt;
 }
 
+export type Visibility = "private" | "link" | "listed";
+
+export interface TemplatesTable {
+  id: Generated<string>;
+  owner_id: string;
+  title: string;
+  description: string;
+  tags: string[];
+  visibility: Visibility;
+  /** Set instead of deleting when athletes were given the template. */
+  archived_at: Date | null;
+  created_at: CreatedAt;
+  updated_at: ColumnType<Date, Date | string | undefined, Date | string>;
+  forked_from_version_id: string | null;
+}
+
+/** Immutable once inserted (a database trigger refuses UPDATE and DELETE). */
+export interface TemplateVersionsTable {
+  id: Generated<string>;
+  template_id: string;
+  /** 1, 2, 3… within a template. */
+  number: number;
+  source: string;
+  /** The parsed programme; written as JSON text, read back as an object. */
+  model: ColumnType<Programme, string, never>;
+  author_id: string;
+  note: string | null;
+  created_at: CreatedAt;
+}
+
+export interface TemplateDraftsTable {
+  owner_id: string;
+  /** The template's id, or "new" for a programme not yet saved as a template. */
+  draft_key: string;
+  template_id: string | null;
+  source: string;
+  /** The version number the editor started from; null for "new". */
+  base_version: number | null;
+  updated_at: ColumnType<Date, Date | string | undefined, Date | string>;
+}
+
+export interface ShareLinksTable {
+  /** 256 random bits, base64url. */
+  token: string;
+  template_id: string;
+  version_id: string;
+  created_by: string;
+  created_at: CreatedAt;
+  revoked_at: Date | null;
+}
+
 export interface Database {
   gyms: GymsTable;
   users: UsersTable;
+  templates: TemplatesTable;
+  template_versions: TemplateVersionsTable;
+  template_drafts: TemplateDraftsTable;
+  share_links: ShareLinksTable;
 }

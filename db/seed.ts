@@ -1,7 +1,12 @@
 import "server-only";
+import { readFile } from "node:fs/promises";
+import path from "node:path";
+import { fileURLToPath } from "node:url";
 import bcrypt from "bcryptjs";
 import type { Kysely } from "kysely";
 import type { Database, Role } from "./database";
+import { createTemplate, updateTemplateMeta } from "./templates";
+import { saveVersion } from "./templateVersions";
 
 /**
  * The demo scenario: an invented independent gym, its coach, three athletes
@@ -21,6 +26,36 @@ export const DEMO_PEOPLE: { email: string; name: string; role: Role; coached?: b
 ];
 
 export async function seedDemo(db: Kysely<Database>): Promise<{ created: number }> {
+  const people = await seedPeople(db);
+  await seedTemplates(db);
+  return people;
+}
+
+/** The coach's shelf: two templates from the samples, one with a second version. Only on a coach with none. */
+const DEMO_TEMPLATES = [
+  { file: "upper-lower.iq", tags: ["strength", "4 days"], description: "Four days: two upper, two lower; a deload every fourth week." },
+  { file: "beginner-full-body.iq", tags: ["beginner", "3 days"], description: "Three short full-body sessions a week for people new to the barbell." },
+];
+
+async function seedTemplates(db: Kysely<Database>): Promise<void> {
+  const coach = await db.selectFrom("users").select(["id", "role"]).where("email", "=", "coach@larchmere.test").executeTakeFirst();
+  if (!coach) return;
+  const has = await db.selectFrom("templates").select("id").where("owner_id", "=", coach.id).executeTakeFirst();
+  if (has) return;
+  const dir = path.join(path.dirname(fileURLToPath(import.meta.url)), "..", "templates");
+  for (const t of DEMO_TEMPLATES) {
+    const source = await readFile(path.join(dir, t.file), "utf8");
+    const title = /^title:\s*(.+)$/m.exec(source)?.[1].trim() ?? t.file;
+    const created = await createTemplate(db, coach, { title, description: t.description, tags: t.tags, source, note: "First version" });
+    if (t.file === "upper-lower.iq") {
+      const v2 = source.replace("lateral raise 3x15 6kg", "lateral raise 4x15 6kg");
+      if (v2 !== source) await saveVersion(db, coach, created.id, { source: v2, note: "One more set of lateral raises" });
+      await updateTemplateMeta(db, coach, created.id, { visibility: "link" });
+    }
+  }
+}
+
+async function seedPeople(db: Kysely<Database>): Promise<{ created: number }> {
   return db.transaction().execute(async (trx) => {
     let gym = await trx.selectFrom("gyms").select("id").where("name", "=", DEMO_GYM.name).executeTakeFirst();
     gym ??= await trx.insertInto("gyms").values({ name: DEMO_GYM.name, city: DEMO_GYM.city }).returning("id").executeTakeFirstOrThrow();

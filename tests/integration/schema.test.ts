@@ -40,6 +40,9 @@ describe("a fresh database", () => {
     expect(Number(rows[0].n)).toBe(DEMO_PEOPLE.length);
     const gyms = await sql<{ n: string }>`select count(*) as n from gyms`.execute(scratch.db);
     expect(Number(gyms.rows[0].n)).toBe(1);
+    // The coach's shelf: two templates, three versions in all, however often the seed runs.
+    const tpl = await sql<{ t: string; v: string }>`select (select count(*) from templates) as t, (select count(*) from template_versions) as v`.execute(scratch.db);
+    expect([Number(tpl.rows[0].t), Number(tpl.rows[0].v)]).toEqual([2, 3]);
   });
 
   it("links the demo athletes to the demo coach", async () => {
