@@ -1,6 +1,9 @@
 import Link from "next/link";
 import { Caution } from "@/components/Caution";
 import { Nameplate } from "@/components/Nameplate";
+import { num, platesText, repsText } from "@/components/preview/format";
+import { expandProgramme } from "@/lib/load";
+import { parseProgramme } from "@/lib/notation";
 
 export const metadata = { title: { absolute: "Ironquill — programmes written as text, loads worked for every athlete" } };
 
@@ -12,13 +15,25 @@ day Upper mon
   A2 chin-up 3x6-10 bw "full hang"
   cable row 3x12 @1rir or machine row`;
 
-// Worked for a 100 kg bench 1RM with Brzycki and a 20 kg bar, 1.25 kg change plates.
-const ROWS = [
-  { kind: "ramp", what: "5 reps", load: "40", plates: "10" },
-  { kind: "ramp", what: "3 reps", load: "57.5", plates: "15 · 2.5 · 1.25" },
-  { kind: "ramp", what: "1 rep", load: "70", plates: "25" },
-  { kind: "work", what: "4 × 5–7 · 2 in reserve", load: "82.5", plates: "25 · 5 · 1.25" },
-];
+// The card beside the sample is worked by the real engine, so it can never disagree with it.
+const WORKED = (() => {
+  const { programme } = parseProgramme(SAMPLE);
+  const athlete = { name: "Tomas", units: "kg" as const, bar: 20, plates: [25, 20, 15, 10, 5, 2.5, 1.25], dumbbellStep: 2, machineStep: 5, maxes: { "bench press": 100 } };
+  const session = expandProgramme(programme, athlete, { start: "2027-01-04", weeks: 1 }).sessions[0];
+  const bench = session?.exercises[0];
+  return {
+    date: session?.date ?? "",
+    isoWeek: session?.isoWeek ?? "",
+    rows: (bench?.sets ?? [])
+      .filter((set, i, all) => set.kind === "warmup" || all.findIndex((x) => x.kind === "work") === i)
+      .map((set) => ({
+        kind: set.kind,
+        what: set.kind === "warmup" ? `${set.repsMin} rep${set.repsMin === 1 ? "" : "s"}` : `${bench?.sets.filter((x) => x.kind === "work").length} × ${repsText(set)} · ${set.rir} in reserve`,
+        load: set.load === null ? "—" : num(set.load),
+        plates: platesText(set),
+      })),
+  };
+})();
 
 export default function Landing() {
   return (
@@ -57,7 +72,7 @@ export default function Landing() {
             <figure className="panel overflow-hidden">
               <figcaption className="flex items-baseline justify-between border-b border-chalk-200 px-4 py-2">
                 <span className="text-[11px] font-semibold uppercase tracking-[0.14em] text-iron-400">Tomas lifts · Mon 4 Jan</span>
-                <span className="font-mono text-[11px] text-iron-400">2027-W01</span>
+                <span className="font-mono text-[11px] text-iron-400">{WORKED.isoWeek}</span>
               </figcaption>
               <div className="px-4 py-3">
                 <p className="font-semibold">A1 · Bench press</p>
@@ -70,7 +85,7 @@ export default function Landing() {
                     </tr>
                   </thead>
                   <tbody className="font-mono">
-                    {ROWS.map((r, i) => (
+                    {WORKED.rows.map((r, i) => (
                       <tr key={i} className={r.kind === "work" ? "border-t border-chalk-200 font-bold text-iron" : "text-iron-500"}>
                         <td className="py-1.5 font-sans">{r.what}</td>
                         <td className="py-1.5 text-right">{r.load}</td>

@@ -80,6 +80,28 @@ export interface ShareLinksTable {
   revoked_at: Date | null;
 }
 
+export type ExerciseEquipment = "barbell" | "dumbbell" | "cable" | "machine" | "bodyweight" | "other";
+export type ExerciseMediaType = "image/jpeg" | "image/png" | "image/webp" | "video/mp4" | "video/webm";
+
+/** A coach's own exercise; the built-in catalogue lives in lib/exercises and is not stored. */
+export interface CoachExercisesTable {
+  id: Generated<string>;
+  owner_id: string;
+  name: string;
+  aliases: string[];
+  equipment: ExerciseEquipment;
+  primary_muscles: string[];
+  movement_pattern: string | null;
+  cues: string;
+  substitution_group: string | null;
+  /** Storage key of the uploaded picture or clip; null without media. */
+  media_key: string | null;
+  /** The type read from the file's bytes, not the one the browser declared. */
+  media_type: ExerciseMediaType | null;
+  created_at: CreatedAt;
+  updated_at: ColumnType<Date, Date | string | undefined, Date | string>;
+}
+
 export interface Database {
   gyms: GymsTable;
   users: UsersTable;
@@ -87,4 +109,5 @@ export interface Database {
   template_versions: TemplateVersionsTable;
   template_drafts: TemplateDraftsTable;
   share_links: ShareLinksTable;
+  coach_exercises: CoachExercisesTable;
 }

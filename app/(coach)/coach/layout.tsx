@@ -1,5 +1,6 @@
 import type { ReactNode } from "react";
 import { AppShell } from "@/components/AppShell";
+import { QueryProvider } from "@/components/QueryProvider";
 import { pageViewer } from "@/server/guard";
 
 export default async function CoachLayout({ children }: { children: ReactNode }) {
@@ -11,10 +12,12 @@ export default async function CoachLayout({ children }: { children: ReactNode })
       nav={[
         { href: "/coach", label: "Overview" },
         { href: "/coach/templates", label: "Templates" },
+        { href: "/coach/library", label: "Exercise library" },
         { href: "/coach/athletes", label: "Athletes" },
+        { href: "/docs/notation", label: "Notation guide" },
       ]}
     >
-      {children}
+      <QueryProvider>{children}</QueryProvider>
     </AppShell>
   );
 }

@@ -1,0 +1,197 @@
+"use client";
+/**
+ * The coach's workbench: the notation editor beside a live preview worked for
+ * a preview athlete. One parse per change feeds the underlines, the problem
+ * list and the preview; the draft is kept locally at once and on the server
+ * shortly after, so a closed tab loses nothing.
+ */
+import { useCallback, useDeferredValue, useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
+import { expandProgramme } from "@/lib/load";
+import { formatProgramme, parseProgramme } from "@/lib/notation";
+import type { Diagnostic } from "@/lib/notation/model";
+import { CATALOGUE } from "@/lib/exercises/catalogue";
+import { resolveExercise } from "@/lib/exercises/resolve";
+import { Caution } from "../Caution";
+import { WeekPreview } from "../preview/WeekPreview";
+import { IqEditor, type IqEditorHandle } from "./IqEditor";
+import { ProblemList, type Problem } from "./ProblemList";
+import { PreviewAthletePanel } from "./PreviewAthletePanel";
+import { nextMonday, SAMPLE_MAXES_KG, sampleProfile } from "./sampleProfile";
+
+export type SaveState = { kind: "idle" } | { kind: "saving" } | { kind: "saved"; message: string } | { kind: "error"; message: string };
+
+type Props = {
+  /** Key for the local draft copy, e.g. "template:<id>" or "template:new". */
+  draftKey: string;
+  initialText: string;
+  /** Extra exercise names the coach's library knows (for completion and name checks). */
+  libraryNames?: readonly string[];
+  onSave(text: string): Promise<SaveState>;
+  onDraft?(text: string): Promise<void>;
+  saveLabel?: string;
+  toolbar?: React.ReactNode;
+};
+
+const CATALOGUE_NAMES = CATALOGUE.flatMap((e) => [e.name, ...e.aliases]);
+
+export function Workbench({ draftKey, initialText, libraryNames = [], onSave, onDraft, saveLabel = "Save version", toolbar }: Props) {
+  const editor = useRef<IqEditorHandle>(null);
+  const [text, setText] = useState(initialText);
+  const [save, setSave] = useState<SaveState>({ kind: "idle" });
+  const [week, setWeek] = useState(1);
+  const [units, setUnits] = useState<"kg" | "lb">("kg");
+  const [maxes, setMaxes] = useState<Record<string, number>>(SAMPLE_MAXES_KG);
+  const [draftNote, setDraftNote] = useState<string | null>(null);
+  const start = useMemo(() => nextMonday(), []);
+  const known = useMemo(() => [...new Set([...CATALOGUE_NAMES, ...libraryNames])], [libraryNames]);
+
+  const parsed = useMemo(() => parseProgramme(text, { knownExercises: known }), [text, known]);
+  // The preview may lag a frame behind fast typing; the underlines never do.
+  const deferred = useDeferredValue(parsed);
+  const totalWeeks = Math.max(1, deferred.programme.blocks.reduce((s, b) => s + b.weeks, 0));
+  const shownWeek = Math.min(week, totalWeeks);
+  const profile = useMemo(() => sampleProfile(units, maxes), [units, maxes]);
+  const expansion = useMemo(() => expandProgramme(deferred.programme, profile, { start, weeks: shownWeek }), [deferred.programme, profile, start, shownWeek]);
+  const sessions = useMemo(() => expansion.sessions.filter((s) => s.weekInProgramme === shownWeek), [expansion, shownWeek]);
+  const rotations = useMemo(() => {
+    const m = new Map<number, string[]>();
+    for (const b of deferred.programme.blocks) for (const d of b.days) for (const e of d.exercises) if (e.variations.length > 1) m.set(e.line, e.variations);
+    return m;
+  }, [deferred.programme]);
+  const usedNames = useMemo(() => {
+    const names = new Set<string>();
+    for (const b of deferred.programme.blocks) for (const d of b.days) for (const e of d.exercises) if (e.intensity) for (const n of [...e.variations, ...e.substitutes]) names.add(resolveExercise(n)?.name ?? n.toLowerCase());
+    return [...names];
+  }, [deferred.programme]);
+
+  const problems: Problem[] = useMemo(() => {
+    const fromNotation = parsed.diagnostics.map((d: Diagnostic) => ({ line: d.line, column: d.column, severity: d.severity, message: d.message }));
+    const fromLoads = expansion.diagnostics
+      .filter((d) => d.line !== null && d.code !== "no-max")
+      .map((d) => ({ line: d.line as number, column: 1, severity: d.severity, message: d.message }));
+    return [...fromNotation, ...fromLoads].sort((a, b) => a.line - b.line || a.column - b.column);
+  }, [parsed.diagnostics, expansion.diagnostics]);
+  const errorCount = parsed.diagnostics.filter((d) => d.severity === "error").length;
+
+  // Keystroke → repaint, measured by the editor benchmark (performance marks, not a test).
+  // Measured once the preview shows the change (the deferred parse has caught up).
+  useLayoutEffect(() => {
+    if (deferred !== parsed || typeof performance === "undefined" || performance.getEntriesByName("iq:change").length === 0) return;
+    requestAnimationFrame(() => {
+      performance.measure("iq:repaint", "iq:change");
+      performance.clearMarks("iq:change");
+    });
+  }, [sessions, parsed, deferred]);
+
+  // Local copy at once; a newer local copy than the server's is offered back on load.
+  useEffect(() => {
+    try {
+      const raw = localStorage.getItem(`iq-draft:${draftKey}`);
+      if (raw) {
+        const saved = JSON.parse(raw) as { text: string; at: string };
+        if (saved.text !== initialText) setDraftNote(saved.at);
+      }
+    } catch {
+      /* storage unavailable: the server draft still applies */
+    }
+  }, [draftKey, initialText]);
+
+  const latestText = useRef(text);
+  useEffect(() => {
+    latestText.current = text;
+    if (text === initialText) return;
+    try {
+      localStorage.setItem(`iq-draft:${draftKey}`, JSON.stringify({ text, at: new Date().toISOString() }));
+    } catch {
+      /* full or blocked storage: the server draft still applies */
+    }
+    if (!onDraft) return;
+    const t = setTimeout(() => void onDraft(text).catch(() => undefined), 800);
+    return () => clearTimeout(t);
+  }, [text, draftKey, initialText, onDraft]);
+
+  const onChange = useCallback((next: string) => {
+    performance.mark("iq:change");
+    setText(next);
+    setSave((s) => (s.kind === "saved" || s.kind === "error" ? { kind: "idle" } : s));
+  }, []);
+
+  const format = useCallback(() => editor.current?.replaceAll(formatProgramme(latestText.current)), []);
+
+  const doSave = useCallback(async () => {
+    setSave({ kind: "saving" });
+    const result = await onSave(latestText.current).catch(() => ({ kind: "error", message: "Could not reach Ironquill; your text is kept here. Try again." }) as SaveState);
+    setSave(result);
+    if (result.kind === "saved") {
+      try {
+        localStorage.removeItem(`iq-draft:${draftKey}`);
+      } catch {
+        /* nothing to clear */
+      }
+    }
+  }, [onSave, draftKey]);
+
+  // Same athlete in the other unit: 1 lb = 0.45359237 kg, maxes to the nearest 2.5 kg / 5 lb.
+  function switchUnits(next: "kg" | "lb") {
+    if (next === units) return;
+    const factor = next === "lb" ? 1 / 0.45359237 : 0.45359237;
+    const step = next === "lb" ? 5 : 2.5;
+    setMaxes(Object.fromEntries(Object.entries(maxes).map(([k, v]) => [k, Math.round((v * factor) / step) * step])));
+    setUnits(next);
+  }
+
+  function restoreLocal() {
+    try {
+      const raw = localStorage.getItem(`iq-draft:${draftKey}`);
+      if (raw) editor.current?.replaceAll((JSON.parse(raw) as { text: string }).text);
+    } finally {
+      setDraftNote(null);
+    }
+  }
+
+  return (
+    <div className="grid gap-4 lg:grid-cols-[minmax(0,1.1fr)_minmax(0,1fr)]">
+      <section aria-label="Programme text" className="flex min-w-0 flex-col gap-3">
+        <div className="flex flex-wrap items-center gap-2">
+          {toolbar}
+          <button type="button" onClick={format} className="btn-quiet py-2" title="Tidy spacing and keyword case (Shift+Alt+F)">
+            Tidy
+          </button>
+          <button type="button" onClick={() => void doSave()} disabled={save.kind === "saving"} className="btn-primary py-2" title="Save a new version (Ctrl/Cmd+S)">
+            {save.kind === "saving" ? "Saving…" : saveLabel}
+          </button>
+          <span role="status" className={`text-sm ${save.kind === "error" ? "text-ember-700" : "text-iron-500"}`} data-testid="save-status">
+            {save.kind === "saved" || save.kind === "error" ? save.message : errorCount ? `${errorCount} to fix before saving` : ""}
+          </span>
+        </div>
+        {draftNote ? (
+          <div className="flex flex-wrap items-center gap-3 rounded-md border border-brass-500/40 bg-brass-100/60 px-3 py-2 text-sm">
+            <span>Unsaved text from {new Date(draftNote).toLocaleString()} was kept on this device.</span>
+            <button type="button" className="font-semibold text-ember-700 underline" onClick={restoreLocal}>Bring it back</button>
+            <button type="button" className="text-iron-500 underline" onClick={() => setDraftNote(null)}>Dismiss</button>
+          </div>
+        ) : null}
+        <div className="panel h-[55dvh] overflow-hidden lg:h-[calc(100dvh-16rem)]">
+          <IqEditor ref={editor} initialText={initialText} diagnostics={parsed.diagnostics} exerciseNames={known} onChange={onChange} onFormat={format} onSave={() => void doSave()} />
+        </div>
+        <ProblemList problems={problems} onJump={(line, column) => editor.current?.jumpTo(line, column)} />
+      </section>
+
+      <section aria-label="Preview" className="flex min-w-0 flex-col gap-3">
+        <div className="flex flex-wrap items-center justify-between gap-2">
+          <h2 className="text-sm font-semibold uppercase tracking-wider text-iron-400">Preview</h2>
+          <div className="flex items-center gap-1" role="group" aria-label="Week">
+            <button type="button" className="btn-quiet px-2.5 py-1.5" onClick={() => setWeek(Math.max(1, shownWeek - 1))} disabled={shownWeek <= 1} aria-label="Previous week">‹</button>
+            <span className="min-w-[6.5rem] text-center text-sm font-semibold" data-testid="preview-week">Week {shownWeek} of {totalWeeks}</span>
+            <button type="button" className="btn-quiet px-2.5 py-1.5" onClick={() => setWeek(Math.min(totalWeeks, shownWeek + 1))} disabled={shownWeek >= totalWeeks} aria-label="Next week">›</button>
+          </div>
+        </div>
+        <PreviewAthletePanel units={units} onUnits={switchUnits} maxes={maxes} onMaxes={setMaxes} names={usedNames} />
+        <div className="lg:max-h-[calc(100dvh-22rem)] lg:overflow-y-auto">
+          <WeekPreview sessions={sessions} rotations={rotations} onLine={(line) => editor.current?.jumpTo(line, 1)} />
+        </div>
+        <Caution />
+      </section>
+    </div>
+  );
+}
