@@ -35,11 +35,11 @@ export default async function SharedTemplatePage({ params }: { params: Promise<{
             </p>
             {shared.description ? <p className="mt-3 max-w-3xl text-iron-700">{shared.description}</p> : null}
             <div className="mt-6 grid gap-6 lg:grid-cols-2">
-              <section aria-label="Programme text">
+              <section aria-label="Programme text" className="min-w-0">
                 <h2 className="mb-2 text-sm font-semibold uppercase tracking-wider text-iron-400">As written</h2>
                 <pre className="overflow-x-auto rounded-xl bg-iron p-4 font-mono text-[13px] leading-6 text-chalk" data-testid="shared-source">{shared.source}</pre>
               </section>
-              <section aria-label="Preview">
+              <section aria-label="Preview" className="min-w-0">
                 <h2 className="mb-2 text-sm font-semibold uppercase tracking-wider text-iron-400">What an athlete gets</h2>
                 <SharedPreview programme={shared.model} />
               </section>
