@@ -62,6 +62,14 @@ describe("library check", () => {
       "unknown exercise 'sled push' — it is not in the exercise library",
     ]);
   });
+  it("warns on every line that uses an unknown name, not only the first", () => {
+    const r = parseProgramme("day A\n  bnch press 3x5\nday B\n  bnch  press 3x5\n  bnch press 3x8", { knownExercises: ["bench press"] });
+    expect(r.diagnostics.map((d) => [d.line, d.message])).toEqual([
+      [2, "unknown exercise 'bnch press' — did you mean bench press?"],
+      [4, "unknown exercise 'bnch press' — did you mean bench press?"],
+      [5, "unknown exercise 'bnch press' — did you mean bench press?"],
+    ]);
+  });
 });
 
 describe("positions", () => {

@@ -13,7 +13,7 @@ import { BuildContext } from "./context";
 import { buildExercise, cueText, type NameUse } from "./exercise";
 import { applySetting, emptySettings } from "./meta";
 import type { Block, Day, Diagnostic, Programme, Weekday } from "./model";
-import { lineNodes } from "./lines";
+import { firstErrorFrom, lineNodes } from "./lines";
 import { nearest } from "./suggest";
 import { reportSyntaxErrors } from "./syntax";
 import { readDeloadWeek, readWeeks } from "./values";
@@ -68,11 +68,13 @@ function build(tree: Tree, source: string, options: BuildOptions = {}): { progra
   };
 
   const nodes = lineNodes(tree, ctx.src);
+  const broken: SyntaxNode[] = [];
   for (const node of nodes) {
+    const cutoff = firstErrorFrom(node);
+    if (cutoff !== Infinity) broken.push(node);
     // A line node that does not open its line was made up by error recovery.
-    const lineStart = ctx.src.lineStarts[ctx.line(node) - 1];
-    if (source.slice(lineStart, node.from).trim() !== "") continue;
-    ctx.enterLine(node);
+    if (!opensLine(ctx, node)) continue;
+    ctx.enterLine(node, cutoff);
     switch (node.name) {
       case "Meta":
         applySetting(ctx, node, settings, blocks.length > 0);
@@ -109,13 +111,24 @@ function build(tree: Tree, source: string, options: BuildOptions = {}): { progra
     ctx.report(at, at + 5, "warning", `block '${b.name}' has no days`);
   }
   if (options.knownExercises) checkNames(ctx, names, options.knownExercises);
-  reportSyntaxErrors(ctx, nodes);
+  reportSyntaxErrors(ctx, broken);
   ctx.diagnostics.sort((a, b) => a.from - b.from || a.to - b.to);
 
   const programme: Programme = {
     title: settings.title, units: settings.units, round: settings.round, model: settings.model, meta: settings.meta, blocks,
   };
   return { programme, diagnostics: ctx.diagnostics };
+}
+
+/** Only spaces (as String.prototype.trim sees them) between the start of the node's line and the node. */
+function opensLine(ctx: BuildContext, node: SyntaxNode): boolean {
+  const text = ctx.src.text;
+  for (let i = ctx.src.lineStarts[ctx.line(node) - 1]; i < node.from; i++) {
+    const ch = text.charCodeAt(i);
+    if (ch === 32 || ch === 9 || ch === 13) continue;
+    if (text[i].trim() !== "") return false;
+  }
+  return true;
 }
 
 function buildBlock(ctx: BuildContext, node: SyntaxNode, blocks: Block[]): Block {
@@ -159,10 +172,16 @@ function nameKey(name: string): string {
 
 function checkNames(ctx: BuildContext, names: NameUse[], known: string[]): void {
   const set = new Set(known.map(nameKey));
+  // A name comes back on many lines; search the library once per spelling.
+  const hints = new Map<string, string>();
   for (const n of names) {
     if (set.has(nameKey(n.name))) continue;
-    const near = nearest(n.name, known);
-    const hint = near.length > 0 ? ` — did you mean ${near.join(", ")}?` : " — it is not in the exercise library";
+    let hint = hints.get(n.name);
+    if (hint === undefined) {
+      const near = nearest(n.name, known);
+      hint = near.length > 0 ? ` — did you mean ${near.join(", ")}?` : " — it is not in the exercise library";
+      hints.set(n.name, hint);
+    }
     ctx.report(n.from, n.to, "warning", `unknown exercise '${n.name}'${hint}`);
   }
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { canonicalSetting, canonicalToken } from "./canonical";
+import { canonicalSetting, canonicalToken, singleSpaced } from "./canonical";
 
 describe("canonicalToken", () => {
   it("lower-cases keywords and weekdays and upper-cases labels", () => {
@@ -22,9 +22,19 @@ describe("canonicalToken", () => {
     expect(canonicalToken("Intensity", "Exercise", "@RPE11")).toBe("@RPE11");
     expect(canonicalToken("Quantity", "Tempo", "311")).toBe("311");
   });
+  it("joins the words of a name with single spaces and keeps their case", () => {
+    expect(canonicalToken("ExerciseName", "Exercise", "Bench \t\u00a0 Press")).toBe("Bench Press");
+    expect(canonicalToken("DayName", "Day", "Upper  A")).toBe("Upper A");
+  });
   it("puts closed cues in straight quotes and leaves an unclosed cue alone", () => {
     expect(canonicalToken("Cue", "Exercise", "“ chest up ”")).toBe('"chest up"');
     expect(canonicalToken("Cue", "Exercise", '"open  ')).toBe('"open');
+  });
+});
+
+describe("singleSpaced", () => {
+  it("leaves other Unicode spaces inside a word alone", () => {
+    expect(singleSpaced("a\u2009b  c")).toBe("a\u2009b c");
   });
 });
 

@@ -101,10 +101,32 @@ function other(name: string, raw: string): string {
   return raw;
 }
 
+// Only the characters the notation itself skips; other Unicode spaces can be part of a word.
+const SPACE_RUNS = /[ \t\r\u00a0]+/g;
+
+/**
+ * A name token's words joined by single spaces, however the source spaced them.
+ *
+ * @example
+ * singleSpaced("bench \t press"); // "bench press"
+ */
+export function singleSpaced(raw: string): string {
+  // Most names are already single-spaced: check before building a new string (this runs per keystroke).
+  for (let i = 0; i < raw.length; i++) {
+    const ch = raw.charCodeAt(i);
+    if (ch === 9 || ch === 13 || ch === 0xa0 || (ch === 32 && raw.charCodeAt(i + 1) === 32)) return raw.replace(SPACE_RUNS, " ");
+  }
+  return raw;
+}
+
 /** Canonical text of a token named `name` whose parent node is `parent`. */
 export function canonicalToken(name: string, parent: string, raw: string): string {
   if (KEYWORDS[name]) return KEYWORDS[name];
   switch (name) {
+    case "ExerciseName":
+    case "DayName":
+    case "BlockName":
+      return singleSpaced(raw);
     case "SetsReps":
       return setsReps(raw);
     case "Intensity":

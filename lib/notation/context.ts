@@ -9,6 +9,7 @@
  */
 import type { SyntaxNode } from "@lezer/common";
 import type { Severity, Diagnostic } from "./model";
+import { singleSpaced } from "./canonical";
 import { firstErrorFrom } from "./lines";
 import { SourceText } from "./source";
 import type { Problem, Read } from "./values";
@@ -24,9 +25,9 @@ export class BuildContext {
     this.src = new SourceText(text);
   }
 
-  /** Begin reading a line node: note where its first syntax error starts. */
-  enterLine(node: SyntaxNode): void {
-    this.cutoff = firstErrorFrom(node);
+  /** Begin reading a line node: note where its first syntax error starts (pass it when already known). */
+  enterLine(node: SyntaxNode, firstError: number = firstErrorFrom(node)): void {
+    this.cutoff = firstError;
   }
 
   /** A node really written before any error (not a token the parser made up to recover). */
@@ -35,12 +36,14 @@ export class BuildContext {
   }
 
   child(node: SyntaxNode, name: string): SyntaxNode | null {
-    for (const c of node.getChildren(name)) if (this.usable(c)) return c;
+    for (let c = node.firstChild; c; c = c.nextSibling) if (c.name === name && this.usable(c)) return c;
     return null;
   }
 
   children(node: SyntaxNode, name: string): SyntaxNode[] {
-    return node.getChildren(name).filter((c) => this.usable(c));
+    const out: SyntaxNode[] = [];
+    for (let c = node.firstChild; c; c = c.nextSibling) if (c.name === name && this.usable(c)) out.push(c);
+    return out;
   }
 
   text(node: { from: number; to: number }): string {
@@ -65,10 +68,8 @@ export class BuildContext {
     this.report(base + p.offset, base + p.offset + p.length, p.severity, p.message);
   }
 
-  /** Words of a name node joined by single spaces (the source may use several). */
-  words(node: SyntaxNode): string {
-    const out: string[] = [];
-    for (let c = node.firstChild; c; c = c.nextSibling) if (this.usable(c) && c.name !== "Comment") out.push(this.text(c));
-    return out.join(" ");
+  /** Words of a name token joined by single spaces (the source may use several). */
+  words(node: { from: number; to: number }): string {
+    return singleSpaced(this.text(node));
   }
 }

@@ -15,6 +15,8 @@ export type { Diagnostic, Programme } from "./model";
 export * from "./model";
 export { formatProgramme } from "./format";
 export type { BuildOptions as ParseOptions } from "./build";
+/** Model and diagnostics from a tree already at hand (an editor's incrementally parsed tree). */
+export { buildProgramme } from "./build";
 
 /** The Lezer syntax tree of a source text (error nodes mark what could not be read). */
 export function parseTree(source: string): Tree {
