@@ -6,6 +6,9 @@ import { Kysely, PostgresDialect } from "kysely";
 import pg from "pg";
 import type { Database } from "./database";
 
+// Calendar dates stay "YYYY-MM-DD" strings: a JS Date would shift them by the server's time zone.
+pg.types.setTypeParser(1082, (v: string) => v);
+
 let instance: Kysely<Database> | null = null;
 
 export function databaseUrl(): string {

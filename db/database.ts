@@ -4,6 +4,7 @@
  */
 import type { ColumnType, Generated } from "kysely";
 import type { Programme } from "../lib/notation/model";
+import type { Session as SessionPlan } from "../lib/load/types";
 
 export type Role = "admin" | "coach" | "athlete";
 
@@ -102,6 +103,122 @@ export interface CoachExercisesTable {
   updated_at: ColumnType<Date, Date | string | undefined, Date | string>;
 }
 
+export type Units = "kg" | "lb";
+type UpdatedAt = ColumnType<Date, Date | string | undefined, Date | string>;
+/** A calendar date as "YYYY-MM-DD" (db/client.ts keeps pg from turning it into a Date). */
+type CalendarDate = string;
+
+/** Plates as the athlete profile takes them: plain weights, or weights with the pairs on hand. */
+export type PlateSet = number[] | { weight: number; pairs: number }[];
+
+export interface AthleteProfilesTable {
+  user_id: string;
+  units: Units;
+  bodyweight: number | null;
+  bar: number;
+  plates: ColumnType<PlateSet, string, string>;
+  dumbbell_step: number;
+  machine_step: number;
+  /** The preset the equipment started from ("kg-club", "lb-garage"…); null once edited by hand. */
+  preset: string | null;
+  updated_by: string | null;
+  updated_at: UpdatedAt;
+}
+
+export type MaxKind = "1rm" | "tm";
+export type MaxSource = "tested" | "estimated" | "logs";
+
+export interface AthleteMaxesTable {
+  id: Generated<string>;
+  athlete_id: string;
+  exercise: string;
+  exercise_key: string;
+  kind: MaxKind;
+  value: number;
+  units: Units;
+  measured_on: CalendarDate;
+  source: MaxSource;
+  note: string | null;
+  created_by: string | null;
+  created_at: CreatedAt;
+}
+
+export interface InvitationsTable {
+  id: Generated<string>;
+  coach_id: string;
+  email: string;
+  name: string | null;
+  token_hash: string;
+  expires_at: Date;
+  sent_at: ColumnType<Date, Date | string | undefined, Date | string>;
+  accepted_at: Date | null;
+  accepted_user_id: string | null;
+  revoked_at: Date | null;
+  created_at: CreatedAt;
+}
+
+export interface PasswordResetsTable {
+  token_hash: string;
+  user_id: string;
+  expires_at: Date;
+  used_at: Date | null;
+  created_at: CreatedAt;
+}
+
+export interface TemplateAssignmentsTable {
+  id: Generated<string>;
+  template_id: string;
+  version_id: string;
+  athlete_id: string;
+  assigned_by: string | null;
+  start_date: CalendarDate;
+  weekdays: string[];
+  status: ColumnType<"active" | "ended", "active" | "ended" | undefined, "active" | "ended">;
+  auto_regulate: ColumnType<boolean, boolean | undefined, boolean>;
+  created_at: CreatedAt;
+  updated_at: UpdatedAt;
+  ended_at: Date | null;
+}
+
+export interface TrainingSessionsTable {
+  id: Generated<string>;
+  assignment_id: string;
+  athlete_id: string;
+  ordinal: number;
+  planned_date: CalendarDate;
+  date: CalendarDate;
+  title: string;
+  /** The expanded session (lib/load Session) with loads and plates; JSON text in, object out. */
+  plan: ColumnType<SessionPlan, string, string>;
+  computed_at: UpdatedAt;
+  logged_at: Date | null;
+  completed_at: Date | null;
+}
+
+export interface CalendarFeedsTable {
+  token: string;
+  athlete_id: string;
+  created_at: CreatedAt;
+  revoked_at: Date | null;
+}
+
+export type JobStatus = "queued" | "running" | "done" | "failed";
+
+export interface JobRunsTable {
+  id: Generated<string>;
+  kind: string;
+  requested_by: string | null;
+  status: ColumnType<JobStatus, JobStatus | undefined, JobStatus>;
+  total: ColumnType<number, number | undefined, number>;
+  done: ColumnType<number, number | undefined, number>;
+  failed: ColumnType<number, number | undefined, number>;
+  payload: ColumnType<Record<string, unknown>, string | undefined, string>;
+  result: ColumnType<Record<string, unknown> | null, string | null, string | null>;
+  error: string | null;
+  created_at: CreatedAt;
+  finished_at: Date | null;
+}
+
 export interface Database {
   gyms: GymsTable;
   users: UsersTable;
@@ -110,4 +227,12 @@ export interface Database {
   template_drafts: TemplateDraftsTable;
   share_links: ShareLinksTable;
   coach_exercises: CoachExercisesTable;
+  athlete_profiles: AthleteProfilesTable;
+  athlete_maxes: AthleteMaxesTable;
+  invitations: InvitationsTable;
+  password_resets: PasswordResetsTable;
+  template_assignments: TemplateAssignmentsTable;
+  training_sessions: TrainingSessionsTable;
+  calendar_feeds: CalendarFeedsTable;
+  job_runs: JobRunsTable;
 }

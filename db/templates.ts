@@ -219,16 +219,10 @@ export async function updateTemplateMeta(db: Db, actor: Actor, id: string, patch
   });
 }
 
-/**
- * Whether athletes were given this template. Assignments are not stored yet;
- * once a `template_assignments` table (with a `template_id` column) exists,
- * this looks there without any change here, and deleting becomes archiving.
- */
+/** Whether athletes were given this template (then deleting archives it instead). */
 export async function hasAssignments(db: Db, templateId: string): Promise<boolean> {
-  const table = await sql<{ exists: boolean }>`select to_regclass('public.template_assignments') is not null as exists`.execute(db);
-  if (!table.rows[0]?.exists) return false;
-  const used = await sql<{ used: boolean }>`select exists (select 1 from template_assignments where template_id = ${templateId}) as used`.execute(db);
-  return Boolean(used.rows[0]?.used);
+  const row = await db.selectFrom("template_assignments").select("id").where("template_id", "=", templateId).limit(1).executeTakeFirst();
+  return row !== undefined;
 }
 
 /** Deletes a template with its versions, drafts and links, or archives it when athletes were given it. */

@@ -6,9 +6,11 @@ import type { Migration } from "kysely";
 import * as m0001 from "./2026-12-01T0001_users";
 import * as m0002 from "./2026-12-01T0002_templates";
 import * as m0003 from "./2026-12-01T0003_exercises";
+import * as m0004 from "./2026-12-01T0004_athletes";
 
 export const migrations: Record<string, Migration> = {
   "2026-12-01T0001_users": m0001,
   "2026-12-01T0002_templates": m0002,
   "2026-12-01T0003_exercises": m0003,
+  "2026-12-01T0004_athletes": m0004,
 };
