@@ -5,3 +5,4 @@
  * parseAthleteProfile(JSON.parse(text));
  */
 export * from "./profile";
+export * from "./presets";
