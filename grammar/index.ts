@@ -27,7 +27,7 @@ const BUFFER_LENGTH = 512;
  * a hash table; the parser reads those fields for every token, and parses about
  * half again as slowly. An object literal with the same fields stays fast.
  */
-function fastFields(p: LRParser): LRParser {
+export function fastFields(p: LRParser): LRParser {
   return Object.setPrototypeOf({ ...p }, Object.getPrototypeOf(p)) as LRParser;
 }
 

@@ -8,13 +8,17 @@ import { foldService, HighlightStyle, LanguageSupport, LRLanguage } from "@codem
 import type { EditorState } from "@codemirror/state";
 import { EditorView } from "@codemirror/view";
 import { tags as t } from "@lezer/highlight";
-import { parser } from "@/grammar";
+import { fastFields, parser } from "@/grammar";
 
 export const iqLanguage = LRLanguage.define({
   name: "iq",
   parser,
   languageData: { commentTokens: { line: "#" } },
 });
+// define() reconfigures the parser, which leaves its fields in V8's slow
+// dictionary mode; swap in a fast copy (see grammar/index.ts) — the language
+// reads only this field when it starts a parse.
+(iqLanguage as { parser: LRLanguage["parser"] }).parser = fastFields(iqLanguage.parser);
 
 export const iqHighlightStyle = HighlightStyle.define([
   { tag: t.definitionKeyword, color: "#a8461f", fontWeight: "700" },

@@ -2,11 +2,13 @@
 import { useRouter } from "next/navigation";
 import { useCallback, useRef, useState } from "react";
 import type { SaveVersionResponse } from "@/app/api/templates/types";
+import { useLibraryNames } from "../editor/useLibraryNames";
 import { Workbench, type SaveState } from "../editor/Workbench";
 import { api, describeFailure } from "./api";
 
 /** The workbench for a saved template: each save is a new version; the draft follows every change. */
 export function TemplateEditor({ id, initialText, baseVersion, libraryNames }: { id: string; initialText: string; baseVersion: number | null; libraryNames: string[] }) {
+  const names = useLibraryNames(libraryNames);
   const router = useRouter();
   const note = useRef<HTMLInputElement>(null);
   const [base, setBase] = useState(baseVersion);
@@ -33,7 +35,7 @@ export function TemplateEditor({ id, initialText, baseVersion, libraryNames }: {
     <Workbench
       draftKey={`template:${id}`}
       initialText={initialText}
-      libraryNames={libraryNames}
+      libraryNames={names}
       onSave={onSave}
       onDraft={onDraft}
       toolbar={

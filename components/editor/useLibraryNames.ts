@@ -1,0 +1,23 @@
+"use client";
+import { useQuery } from "@tanstack/react-query";
+import type { NamesResponse } from "@/app/api/exercises/types";
+import { api } from "../templates/api";
+
+/**
+ * The coach's own exercise names, fresh whenever the editor tab regains focus:
+ * "Add to library" opens the library in another tab, and the warning should
+ * clear as soon as the coach comes back, without a reload.
+ */
+export function useLibraryNames(initial: string[]): string[] {
+  const query = useQuery({
+    queryKey: ["exercise-names"],
+    queryFn: async () => {
+      const r = await api<NamesResponse>("/api/exercises/names");
+      return r.names.filter((n) => !n.builtIn).map((n) => n.name);
+    },
+    initialData: initial,
+    staleTime: 0,
+    refetchOnWindowFocus: true,
+  });
+  return query.data;
+}
