@@ -1,7 +1,8 @@
 /**
  * Local settings shared by the start and test commands: makes sure .env.local
  * holds a NEXTAUTH_SECRET (generated once) and the database URL of the
- * project's own PostgreSQL, and returns the environment child processes get.
+ * project's own PostgreSQL, and returns the environment child processes get,
+ * with mail pointed at the local fake SMTP server (scripts/fakes/smtp.mjs).
  */
 import { execFileSync } from "node:child_process";
 import { randomBytes } from "node:crypto";
@@ -26,8 +27,11 @@ export function db(...args) {
   return execFileSync("bash", [join(root, "scripts/db.sh"), ...args], { encoding: "utf8", stdio: ["ignore", "pipe", "inherit"] }).trim();
 }
 
-/** Ensures .env.local exists with the values the app needs; returns them merged over process.env. */
-export function localEnv({ database = "ironquill", port } = {}) {
+/**
+ * Ensures .env.local exists with the values the app needs; returns them merged over process.env.
+ * `mode: "test"` gives mail its own port (2526) and mailbox folder so a test run never mixes with `npm start`.
+ */
+export function localEnv({ database = "ironquill", port, mode = "start" } = {}) {
   const file = readEnvFile();
   let changed = false;
   if (!file.NEXTAUTH_SECRET) {
@@ -50,5 +54,20 @@ export function localEnv({ database = "ironquill", port } = {}) {
     DATABASE_URL: database === "ironquill" ? (process.env.DATABASE_URL ?? url) : db("url", database),
     NEXTAUTH_URL: process.env.NEXTAUTH_URL ?? `http://localhost:${appPort}`,
     PORT: appPort,
+    ...localMail(mode),
+  };
+}
+
+/** Mail goes to the fake on 127.0.0.1 that the start and test commands run (IQ_SMTP_PORT moves it). */
+function localMail(mode) {
+  const test = mode === "test";
+  return {
+    SMTP_HOST: "127.0.0.1",
+    SMTP_PORT: String(process.env.IQ_SMTP_PORT ?? (test ? 2526 : 2525)),
+    SMTP_SECURE: "false",
+    SMTP_USER: "",
+    SMTP_PASS: "",
+    MAIL_FROM: "Ironquill <no-reply@ironquill.test>",
+    IQ_MAILBOX_DIR: join(root, ".data", test ? "mailbox-test" : "mailbox"),
   };
 }

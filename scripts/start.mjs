@@ -2,12 +2,15 @@
  * `npm start`: PostgreSQL up, schema migrated, demo seeded when the database is
  * empty, a production build made when there is none, then the app served on
  * 127.0.0.1 (PORT overrides 3000). `--dev` serves with hot reload instead;
- * `--rebuild` forces a fresh build. Ctrl-C stops everything it started.
+ * `--rebuild` forces a fresh build. Mail goes to a local fake SMTP server
+ * (scripts/fakes.mjs); an admin reads it at /admin/mailbox. Ctrl-C stops
+ * everything it started.
  */
 import { spawn, spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
 import { join } from "node:path";
 import { db, localEnv, root } from "./env.mjs";
+import { startFakes } from "./fakes.mjs";
 
 const dev = process.argv.includes("--dev");
 const rebuild = process.argv.includes("--rebuild");
@@ -38,6 +41,15 @@ if (!dev && (rebuild || !existsSync(join(root, ".next/BUILD_ID")))) {
   step("building the app (first start takes a minute or two)", "npm", ["run", "-s", "build"], { ...env, NODE_ENV: "production" });
 }
 
+process.stdout.write(`• starting the local mail catcher on 127.0.0.1:${env.SMTP_PORT}\n`);
+let fakes;
+try {
+  fakes = await startFakes(env);
+} catch (err) {
+  console.error(`✗ ${err.message}`);
+  process.exit(1);
+}
+
 const port = env.PORT;
 const args = dev ? ["dev", "--turbopack", "-H", "127.0.0.1", "-p", port] : ["start", "-H", "127.0.0.1", "-p", port];
 const server = spawn(bin("next"), args, { cwd: root, env, stdio: ["ignore", "pipe", "inherit"] });
@@ -61,7 +73,8 @@ function stop(signal) {
 }
 process.on("SIGINT", () => stop("SIGINT"));
 process.on("SIGTERM", () => stop("SIGTERM"));
-server.on("exit", (code) => {
+server.on("exit", async (code) => {
+  await fakes.stop();
   // Leave PostgreSQL as we found it: stop it only if this command started it.
   if (!dbWasRunning) {
     try {

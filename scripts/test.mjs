@@ -1,7 +1,8 @@
 /**
  * `npm test`: every test, against real services.
  *  1. PostgreSQL up (and Debian's chromium installed when root and missing);
- *  2. a test database recreated from nothing, migrated and seeded;
+ *  2. a test database recreated from nothing, migrated and seeded; the local fake
+ *     SMTP server started on its own port with an emptied mailbox (scripts/fakes.mjs);
  *  3. a type check of the whole tree, then Vitest: unit tests and integration tests against that database;
  *  4. a production build (in .next-test) and Playwright in /usr/bin/chromium.
  * Ends with one line `N passed, N failed` summing both runners; exits 1 on any failure.
@@ -10,6 +11,7 @@ import { spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync, rmSync } from "node:fs";
 import { join } from "node:path";
 import { db, localEnv, root } from "./env.mjs";
+import { startFakes } from "./fakes.mjs";
 
 const TEST_DB = "ironquill_test";
 const bin = (name) => join(root, "node_modules/.bin", name);
@@ -56,7 +58,7 @@ try {
   process.exit(1);
 }
 const env = {
-  ...localEnv({ database: TEST_DB, port: process.env.E2E_PORT ?? 3100 }),
+  ...localEnv({ database: TEST_DB, port: process.env.E2E_PORT ?? 3100, mode: "test" }),
   NODE_ENV: "test",
   IQ_TEST_DB_ADMIN_URL: db("url", "postgres"),
   E2E_PORT: process.env.E2E_PORT ?? "3100",
@@ -66,6 +68,17 @@ env.NEXTAUTH_URL = `http://127.0.0.1:${env.E2E_PORT}`;
 let setupFailed = 0;
 if (run("migrating the test database", bin("tsx"), ["scripts/migrate.ts"], env) !== 0) setupFailed++;
 if (run("seeding the test database", bin("tsx"), ["--conditions=react-server", "scripts/seed.ts"], env) !== 0) setupFailed++;
+
+// Mail sent by the app (and read back by the browser tests) lands in a fresh folder.
+console.log(`\n▶ starting the local mail catcher on 127.0.0.1:${env.SMTP_PORT}`);
+rmSync(env.IQ_MAILBOX_DIR, { recursive: true, force: true });
+let fakes = null;
+try {
+  fakes = await startFakes(env);
+} catch (err) {
+  console.error(`✗ ${err.message}`);
+  setupFailed++;
+}
 
 // The whole tree type-checks (the build below only checks what the app imports).
 if (run("type check (tsc)", bin("tsc"), ["--noEmit", "-p", "."], env) === 0) passed += 1;
@@ -105,6 +118,7 @@ if (!skipE2E) {
   }
 }
 
+await fakes?.stop();
 failed += setupFailed;
 console.log(`\n${passed} passed, ${failed} failed`);
 process.exit(failed > 0 || vitestCode !== 0 ? 1 : 0);

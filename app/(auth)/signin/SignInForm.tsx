@@ -3,7 +3,7 @@ import { signIn } from "next-auth/react";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 
-export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
+export function SignInForm({ callbackUrl, defaultEmail = "" }: { callbackUrl: string; defaultEmail?: string }) {
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
   const [pending, setPending] = useState(false);
@@ -38,7 +38,7 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       <div>
         <label htmlFor="email" className="field-label">E-mail</label>
-        <input id="email" name="email" type="email" autoComplete="email" required className="field-input" />
+        <input id="email" name="email" type="email" autoComplete="email" required defaultValue={defaultEmail} className="field-input" />
       </div>
       <div>
         <label htmlFor="password" className="field-label">Password</label>
