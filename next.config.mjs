@@ -4,8 +4,8 @@ const nextConfig = {
   poweredByHeader: false,
   // The test run builds into its own folder so it never fights a running `npm start`.
   distDir: process.env.NEXT_DIST_DIR || ".next",
-  // The card renderer and the database driver stay server-side Node modules.
-  serverExternalPackages: ["@react-pdf/renderer", "pg"],
+  // The card renderer, the database driver and the job queue stay server-side Node modules.
+  serverExternalPackages: ["@react-pdf/renderer", "pg", "pg-boss"],
   // forbidden() answers a signed-in person with the wrong role with a real 403.
   experimental: { authInterrupts: true },
   // Next checks what the app imports; `npm run typecheck` covers the whole tree (CLI, benches, tests).

@@ -4,7 +4,12 @@ import path from "node:path";
 import { fileURLToPath } from "node:url";
 import bcrypt from "bcryptjs";
 import type { Kysely } from "kysely";
-import type { Database, Role } from "./database";
+import { equipmentPreset, type EquipmentPresetId } from "../lib/athlete/presets";
+import { addDays, isoWeekdayNumber } from "../lib/dates/date";
+import { exerciseKey } from "../lib/exercises/resolve";
+import { assignTemplate } from "./assignments";
+import type { Database, MaxSource, Role } from "./database";
+import { todayUtc } from "./recompute";
 import { createTemplate, updateTemplateMeta } from "./templates";
 import { saveVersion } from "./templateVersions";
 
@@ -28,6 +33,7 @@ export const DEMO_PEOPLE: { email: string; name: string; role: Role; coached?: b
 export async function seedDemo(db: Kysely<Database>): Promise<{ created: number }> {
   const people = await seedPeople(db);
   await seedTemplates(db);
+  await seedTraining(db);
   return people;
 }
 
@@ -97,4 +103,127 @@ async function seedPeople(db: Kysely<Database>): Promise<{ created: number }> {
 export async function isEmpty(db: Kysely<Database>): Promise<boolean> {
   const row = await db.selectFrom("users").select((eb) => eb.fn.countAll<string>().as("n")).executeTakeFirstOrThrow();
   return Number(row.n) === 0;
+}
+
+type DemoMax = { exercise: string; value: number; daysAgo: number; source: MaxSource; note?: string };
+
+/**
+ * Each athlete's gym and maxes (Tomas in a kg club, Maya in an lb garage,
+ * Lena at a kg home rack with a few lifts on file), and the coach's
+ * upper/lower template for Tomas and Maya. Lena is left unassigned so the
+ * coach has someone to assign on a first visit.
+ */
+const DEMO_TRAINING: { email: string; preset: EquipmentPresetId; bodyweight: number; maxes: DemoMax[]; assign: boolean }[] = [
+  {
+    email: "tomas@larchmere.test",
+    preset: "kg-club",
+    bodyweight: 82.5,
+    assign: true,
+    maxes: [
+      { exercise: "back squat", value: 132.5, daysAgo: 120, source: "tested", note: "Autumn test day" },
+      { exercise: "back squat", value: 140, daysAgo: 18, source: "tested", note: "Winter test day" },
+      { exercise: "bench press", value: 100, daysAgo: 18, source: "tested", note: "Winter test day" },
+      { exercise: "deadlift", value: 180, daysAgo: 17, source: "tested", note: "Winter test day" },
+      { exercise: "incline press", value: 82.5, daysAgo: 30, source: "estimated" },
+      { exercise: "front squat", value: 112.5, daysAgo: 30, source: "estimated" },
+      { exercise: "romanian deadlift", value: 140, daysAgo: 30, source: "estimated" },
+      { exercise: "cable row", value: 80, daysAgo: 30, source: "estimated" },
+      { exercise: "chest-supported row", value: 70, daysAgo: 30, source: "estimated" },
+      { exercise: "leg curl", value: 60, daysAgo: 30, source: "estimated" },
+    ],
+  },
+  {
+    email: "maya@larchmere.test",
+    preset: "lb-garage",
+    bodyweight: 148,
+    assign: true,
+    maxes: [
+      { exercise: "back squat", value: 225, daysAgo: 25, source: "tested" },
+      { exercise: "bench press", value: 135, daysAgo: 25, source: "tested" },
+      { exercise: "deadlift", value: 285, daysAgo: 24, source: "tested" },
+      { exercise: "incline press", value: 115, daysAgo: 40, source: "estimated" },
+      { exercise: "front squat", value: 175, daysAgo: 40, source: "estimated" },
+      { exercise: "romanian deadlift", value: 205, daysAgo: 40, source: "estimated" },
+    ],
+  },
+  {
+    email: "lena@larchmere.test",
+    preset: "kg-home",
+    bodyweight: 64,
+    assign: false,
+    maxes: [
+      { exercise: "back squat", value: 85, daysAgo: 10, source: "estimated" },
+      { exercise: "bench press", value: 50, daysAgo: 10, source: "estimated" },
+      { exercise: "deadlift", value: 105, daysAgo: 10, source: "estimated" },
+    ],
+  },
+];
+
+/**
+ * Each piece is added only when the athlete has none of it yet, so running the
+ * seed again changes nothing. The assignment starts on the Monday of the
+ * current week (UTC, at seed time): every day of the upper/lower template is
+ * tagged with its weekday (Mon, Tue, Thu, Fri), so today has a session
+ * whenever today is one of those days, and the nearest one is at most two days
+ * away otherwise. No weekday list is passed because no day is left untagged.
+ */
+async function seedTraining(db: Kysely<Database>): Promise<void> {
+  const coach = await db.selectFrom("users").select(["id", "role"]).where("email", "=", "coach@larchmere.test").executeTakeFirst();
+  if (!coach) return;
+  const today = todayUtc();
+  const monday = addDays(today, 1 - isoWeekdayNumber(today));
+  const version = await db
+    .selectFrom("template_versions as v")
+    .innerJoin("templates as t", "t.id", "v.template_id")
+    .select("v.id")
+    .where("t.owner_id", "=", coach.id)
+    .where("t.title", "=", "Upper/lower, four days")
+    .where("t.archived_at", "is", null)
+    .orderBy("v.number", "desc")
+    .limit(1)
+    .executeTakeFirst();
+  for (const d of DEMO_TRAINING) {
+    const athlete = await db.selectFrom("users").select("id").where("email", "=", d.email).where("coach_id", "=", coach.id).executeTakeFirst();
+    if (!athlete) continue;
+    const p = equipmentPreset(d.preset);
+    await db
+      .insertInto("athlete_profiles")
+      .values({
+        user_id: athlete.id,
+        units: p.units,
+        bodyweight: d.bodyweight,
+        bar: p.bar,
+        plates: JSON.stringify(p.plates),
+        dumbbell_step: p.dumbbellStep,
+        machine_step: p.machineStep,
+        preset: p.id,
+        updated_by: coach.id,
+      })
+      .onConflict((oc) => oc.column("user_id").doNothing())
+      .execute();
+    const hasMax = await db.selectFrom("athlete_maxes").select("id").where("athlete_id", "=", athlete.id).executeTakeFirst();
+    if (!hasMax) {
+      await db
+        .insertInto("athlete_maxes")
+        .values(
+          d.maxes.map((m) => ({
+            athlete_id: athlete.id,
+            exercise: m.exercise,
+            exercise_key: exerciseKey(m.exercise),
+            kind: "1rm" as const,
+            value: m.value,
+            units: p.units,
+            measured_on: addDays(today, -m.daysAgo),
+            source: m.source,
+            note: m.note ?? null,
+            created_by: coach.id,
+          })),
+        )
+        .execute();
+    }
+    const hasAssignment = await db.selectFrom("template_assignments").select("id").where("athlete_id", "=", athlete.id).executeTakeFirst();
+    if (d.assign && version && !hasAssignment) {
+      await assignTemplate(db, coach, { versionId: version.id, athleteIds: [athlete.id], startDate: monday, weekdays: [] });
+    }
+  }
 }

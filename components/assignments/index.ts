@@ -1,0 +1,2 @@
+export { AssignPanel, type AthleteOption } from "./AssignPanel";
+export { AssignmentList } from "./AssignmentList";
