@@ -1,5 +1,6 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
+import { NavLink } from "./NavLink";
 import { NibMark } from "./Nameplate";
 import { SignOutButton } from "./SignOutButton";
 
@@ -34,9 +35,7 @@ export function AppShell({ area, nav, viewerName, children }: { area: keyof type
           <ul className="mx-auto flex max-w-6xl gap-1 overflow-x-auto px-2">
             {nav.map((item) => (
               <li key={item.href}>
-                <Link href={item.href} className="block whitespace-nowrap px-3 py-2.5 text-sm font-medium text-iron-200 hover:text-white">
-                  {item.label}
-                </Link>
+                <NavLink href={item.href} label={item.label} exact={item.href === nav[0]?.href} />
               </li>
             ))}
           </ul>
