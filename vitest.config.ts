@@ -13,7 +13,7 @@ export default defineConfig({
     ],
   },
   test: {
-    include: ["{lib,grammar,cli,db,tests/unit,tests/integration}/**/*.test.ts"],
+    include: ["{lib,grammar,cli,db,pdf,tests/unit,tests/integration}/**/*.test.ts"],
     environment: "node",
     // Integration tests share one database; run files one at a time.
     fileParallelism: false,

@@ -41,6 +41,7 @@ export default function Landing() {
       <header className="mx-auto flex w-full max-w-6xl items-center justify-between px-4 py-4">
         <Nameplate />
         <nav className="flex items-center gap-2">
+          <Link href="/store" className="rounded-md px-3 py-2 text-sm font-semibold text-iron-700 hover:bg-chalk-200">Programme store</Link>
           <Link href="/signin" className="rounded-md px-3 py-2 text-sm font-semibold text-iron-700 hover:bg-chalk-200">Sign in</Link>
           <Link href="/signup" className="btn-primary hidden sm:inline-flex">Start as a coach</Link>
         </nav>

@@ -11,6 +11,7 @@ const commands: Record<string, Command> = {
   check: { summary: "check FILE...              report problems as FILE:LINE:COL: severity: message", load: () => import("./commands/check") },
   fmt: { summary: "fmt FILE [--write]          print (or rewrite) the canonical form", load: () => import("./commands/fmt") },
   expand: { summary: "expand FILE --athlete PROFILE.json --start YYYY-MM-DD [--days mon,wed,fri] [--weeks N] [--json]", load: () => import("./commands/expand") },
+  cards: { summary: "cards FILE --athlete PROFILE.json --start YYYY-MM-DD [--week N] [--size a6|a5|letter] --out cards.pdf", load: () => import("./commands/cards") },
 };
 
 function usage(): string {

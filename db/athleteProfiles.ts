@@ -3,7 +3,7 @@ import type { AthleteProfile } from "../lib/athlete/profile";
 import { defaultPresetFor } from "../lib/athlete/presets";
 import { convertMass } from "../lib/load/units";
 import type { MaxKind, MaxSource, PlateSet, Units } from "./database";
-import type { Db } from "./athleteAccess";
+import { type Actor, type Db, requireAthleteFor } from "./athleteAccess";
 
 export type Equipment = {
   units: Units;
@@ -89,4 +89,16 @@ export async function expansionProfile(db: Db, athleteId: string, name: string):
     maxes: byName,
     ...(eq.bodyweight !== null ? { bodyweight: eq.bodyweight } : {}),
   };
+}
+
+export type AthleteOverview = { athlete: { id: string; name: string; email: string }; equipment: Equipment; maxes: CurrentMax[] };
+
+/**
+ * Name, e-mail, equipment and current maxes; not_found for anyone but the
+ * athlete and their coach. Changes go through db/athleteMaxes.ts.
+ */
+export async function athleteOverview(db: Db, actor: Actor, athleteId: string): Promise<AthleteOverview> {
+  const a = await requireAthleteFor(db, actor, athleteId);
+  const [equipment, maxes] = await Promise.all([getEquipment(db, a.id), currentMaxes(db, a.id)]);
+  return { athlete: { id: a.id, name: a.name, email: a.email }, equipment, maxes };
 }

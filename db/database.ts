@@ -219,6 +219,69 @@ export interface JobRunsTable {
   finished_at: Date | null;
 }
 
+/** One logged set; (session_id, exercise_index, set_index) is unique. */
+export interface SetLogsTable {
+  id: Generated<string>;
+  session_id: string;
+  athlete_id: string;
+  /** Index in plan.exercises. */
+  exercise_index: number;
+  /** Index in the sets of the exercise done (warm-ups first). */
+  set_index: number;
+  kind: "warmup" | "work";
+  /** The exercise done: the substitute's name when swapped. */
+  exercise: string;
+  exercise_key: string;
+  planned_exercise: string;
+  planned_reps: number | null;
+  planned_load: number | null;
+  planned_seconds: number | null;
+  bodyweight: ColumnType<boolean, boolean | undefined, boolean>;
+  reps: number;
+  load: number;
+  unit: Units;
+  rir: number | null;
+  done: ColumnType<boolean, boolean | undefined, boolean>;
+  client_id: string | null;
+  client_updated_at: ColumnType<Date, Date | string, Date | string>;
+  logged_at: CreatedAt;
+  updated_at: UpdatedAt;
+}
+
+/** The exercise chosen for a slot of a session (a substitute or the planned one) and its note. */
+export interface SessionExerciseLogsTable {
+  session_id: string;
+  exercise_index: number;
+  athlete_id: string;
+  exercise: string;
+  exercise_key: string;
+  note: string | null;
+  updated_at: UpdatedAt;
+}
+
+export type ProposalStatus = "open" | "accepted" | "dismissed";
+
+/** A max proposed from the logs; at most one open per athlete and exercise. */
+export interface MaxProposalsTable {
+  id: Generated<string>;
+  athlete_id: string;
+  assignment_id: string;
+  exercise: string;
+  exercise_key: string;
+  current_max_id: string | null;
+  current_value: number;
+  proposed_value: number;
+  estimate: number;
+  units: Units;
+  basis: ColumnType<{ sessionId: string; date: string; e1rm: number; reps: number; load: number; rir: number | null }[], string, string>;
+  status: ColumnType<ProposalStatus, ProposalStatus | undefined, ProposalStatus>;
+  decided_at: Date | null;
+  decided_by: string | null;
+  accepted_max_id: string | null;
+  created_at: CreatedAt;
+  updated_at: UpdatedAt;
+}
+
 export interface Database {
   gyms: GymsTable;
   users: UsersTable;
@@ -235,4 +298,123 @@ export interface Database {
   training_sessions: TrainingSessionsTable;
   calendar_feeds: CalendarFeedsTable;
   job_runs: JobRunsTable;
+  set_logs: SetLogsTable;
+  session_exercise_logs: SessionExerciseLogsTable;
+  max_proposals: MaxProposalsTable;
+  listings: ListingsTable;
+  purchases: PurchasesTable;
+  entitlements: EntitlementsTable;
+  webhook_events: WebhookEventsTable;
+  recipes: RecipesTable;
+  recipe_ingredients: RecipeIngredientsTable;
+  recipe_attachments: RecipeAttachmentsTable;
+}
+
+export type ListingLevel = "beginner" | "intermediate" | "advanced";
+
+/** A coach's template offered for sale; money in integer minor units of `currency` (ISO 4217, lower case). */
+export interface ListingsTable {
+  id: Generated<string>;
+  template_id: string;
+  seller_id: string;
+  /** The version buyers receive and the preview shows. */
+  version_id: string;
+  slug: string;
+  price_minor: number;
+  currency: string;
+  /** The public description shown in the store. */
+  summary: string;
+  level: ListingLevel;
+  weeks: number;
+  days_per_week: number;
+  /** Set while the coach offers it; null when withdrawn or never offered. */
+  listed_at: Date | null;
+  /** Set when an admin took it out of the store. */
+  unlisted_at: Date | null;
+  unlisted_by: string | null;
+  unlisted_reason: string | null;
+  created_at: CreatedAt;
+  updated_at: UpdatedAt;
+}
+
+export type PurchaseStatus = "pending" | "paid" | "refunded";
+
+export interface PurchasesTable {
+  id: Generated<string>;
+  /** Receipt number; bigint comes back from pg as a string. */
+  number: ColumnType<string, never, never>;
+  listing_id: string | null;
+  version_id: string | null;
+  buyer_id: string;
+  seller_id: string;
+  title: string;
+  amount_minor: number;
+  currency: string;
+  status: ColumnType<PurchaseStatus, PurchaseStatus | undefined, PurchaseStatus>;
+  attempt_id: string;
+  checkout_session_id: string | null;
+  payment_intent_id: string | null;
+  refund_id: string | null;
+  copy_template_id: string | null;
+  created_at: CreatedAt;
+  paid_at: Date | null;
+  refunded_at: Date | null;
+}
+
+/** The buyer's right to their copy of a purchased version; revoked (not deleted) on refund. */
+export interface EntitlementsTable {
+  id: Generated<string>;
+  purchase_id: string;
+  user_id: string;
+  template_id: string;
+  source_version_id: string | null;
+  granted_at: CreatedAt;
+  revoked_at: Date | null;
+}
+
+/** Every payment-provider event handled, once: the provider's event id is the key. */
+export interface WebhookEventsTable {
+  id: string;
+  type: string;
+  outcome: string;
+  purchase_id: string | null;
+  received_at: CreatedAt;
+}
+
+/** A coach's recipe; its ingredients are rows of recipe_ingredients. */
+export interface RecipesTable {
+  id: Generated<string>;
+  owner_id: string;
+  title: string;
+  servings: number;
+  steps: string[];
+  created_at: CreatedAt;
+  updated_at: ColumnType<Date, Date | string | undefined, Date | string>;
+}
+
+/** One ingredient: an amount (g, ml with a density, or pieces with a weight) and its label per 100 g. */
+export interface RecipeIngredientsTable {
+  id: Generated<string>;
+  recipe_id: string;
+  position: number;
+  name: string;
+  kind: "g" | "ml" | "piece";
+  amount: number;
+  density: number | null;
+  piece_grams: number | null;
+  energy_kcal: number;
+  protein: number;
+  carbohydrate: number;
+  fat: number;
+  fibre: number | null;
+}
+
+/** A recipe shown to the athletes of a template, or to one athlete through an assignment (exactly one is set). */
+export interface RecipeAttachmentsTable {
+  id: Generated<string>;
+  recipe_id: string;
+  template_id: string | null;
+  assignment_id: string | null;
+  attached_by: string | null;
+  created_at: CreatedAt;
 }

@@ -8,6 +8,8 @@ import { equipmentPreset, type EquipmentPresetId } from "../lib/athlete/presets"
 import { addDays, isoWeekdayNumber } from "../lib/dates/date";
 import { exerciseKey } from "../lib/exercises/resolve";
 import { assignTemplate } from "./assignments";
+import { seedStore } from "./listings";
+import { attachRecipe, createRecipe } from "./recipes";
 import type { Database, MaxSource, Role } from "./database";
 import { todayUtc } from "./recompute";
 import { createTemplate, updateTemplateMeta } from "./templates";
@@ -34,7 +36,39 @@ export async function seedDemo(db: Kysely<Database>): Promise<{ created: number 
   const people = await seedPeople(db);
   await seedTemplates(db);
   await seedTraining(db);
+  await seedShopAndKitchen(db);
   return people;
+}
+
+/**
+ * One template on sale, and one batch recipe the coach hands out with the
+ * upper/lower programme (label values invented, typical of such foods).
+ */
+async function seedShopAndKitchen(db: Kysely<Database>): Promise<void> {
+  const coach = await db.selectFrom("users").select(["id", "role"]).where("email", "=", "coach@larchmere.test").executeTakeFirst();
+  if (!coach) return;
+  await seedStore(db, coach.id);
+  const hasRecipe = await db.selectFrom("recipes").select("id").where("owner_id", "=", coach.id).executeTakeFirst();
+  if (hasRecipe) return;
+  const recipe = await createRecipe(db, coach, {
+    title: "Chicken, rice and beans batch",
+    servings: 4,
+    steps: [
+      "Rinse the rice and cook it in twice its volume of water, about 12 minutes.",
+      "Dice the chicken and brown it in the oil over a high heat, 6–8 minutes.",
+      "Add the drained beans and the passata, simmer 10 minutes, season.",
+      "Split into four boxes; keeps three days in the fridge.",
+    ],
+    ingredients: [
+      { name: "Chicken breast", kind: "g", amount: 600, density: null, pieceGrams: null, energyKcal: 106, protein: 24, carbohydrate: 0, fat: 1.2, fibre: null },
+      { name: "Basmati rice, dry", kind: "g", amount: 300, density: null, pieceGrams: null, energyKcal: 351, protein: 8, carbohydrate: 77, fat: 1, fibre: 1.5 },
+      { name: "Kidney beans, drained", kind: "g", amount: 240, density: null, pieceGrams: null, energyKcal: 110, protein: 8, carbohydrate: 14, fat: 0.5, fibre: 7 },
+      { name: "Tomato passata", kind: "g", amount: 500, density: null, pieceGrams: null, energyKcal: 31, protein: 1.4, carbohydrate: 5, fat: 0.2, fibre: 1.2 },
+      { name: "Olive oil", kind: "ml", amount: 15, density: 0.91, pieceGrams: null, energyKcal: 824, protein: 0, carbohydrate: 0, fat: 91.6, fibre: null },
+    ],
+  });
+  const upperLower = await db.selectFrom("templates").select("id").where("owner_id", "=", coach.id).where("title", "like", "%pper%").executeTakeFirst();
+  if (upperLower) await attachRecipe(db, coach, recipe.id, { templateId: upperLower.id });
 }
 
 /** The coach's shelf: two templates from the samples, one with a second version. Only on a coach with none. */

@@ -55,6 +55,26 @@ export function localEnv({ database = "ironquill", port, mode = "start" } = {}) 
     NEXTAUTH_URL: process.env.NEXTAUTH_URL ?? `http://localhost:${appPort}`,
     PORT: appPort,
     ...localMail(mode),
+    ...localPayments(mode, appPort, file),
+  };
+}
+
+/**
+ * The payment SDK talks to the fake on 127.0.0.1 (IQ_PAYMENTS_PORT moves it), whose signed
+ * events come back to this app's webhook. Real keys set in .env.local win: then the SDK uses
+ * the provider itself and no fake is started (see DEVELOPERS.md, Payments).
+ */
+function localPayments(mode, appPort, file) {
+  if (file.STRIPE_SECRET_KEY && !file.STRIPE_API_HOST) return {};
+  const port = String(process.env.IQ_PAYMENTS_PORT ?? (mode === "test" ? 12112 : 12111));
+  return {
+    STRIPE_SECRET_KEY: "sk_test_ironquill_local",
+    STRIPE_WEBHOOK_SECRET: "whsec_ironquill_local",
+    STRIPE_API_HOST: "127.0.0.1",
+    STRIPE_API_PORT: port,
+    STRIPE_API_PROTOCOL: "http",
+    FAKE_PAYMENTS_PORT: port,
+    FAKE_PAYMENTS_WEBHOOK_URL: `http://127.0.0.1:${appPort}/api/webhooks/payments`,
   };
 }
 

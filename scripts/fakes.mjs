@@ -17,6 +17,8 @@ import { root } from "./env.mjs";
 
 export const FAKES = [
   { name: "mail (SMTP)", script: "scripts/fakes/smtp.mjs", host: (env) => env.SMTP_HOST, port: (env) => Number(env.SMTP_PORT) },
+  // Only when the SDK is pointed at a local host: with real keys there is nothing to fake.
+  { name: "payments", script: "scripts/fakes/payments.mjs", host: (env) => env.STRIPE_API_HOST, port: (env) => Number(env.STRIPE_API_PORT), when: (env) => Boolean(env.STRIPE_API_HOST) },
 ];
 
 const READY_WITHIN_MS = 15_000;
@@ -68,6 +70,7 @@ export async function startFakes(env) {
   const children = [];
   const stop = () => Promise.all(children.map(stopChild)).then(() => undefined);
   for (const fake of FAKES) {
+    if (fake.when && !fake.when(env)) continue;
     const child = spawn(process.execPath, [join(root, fake.script)], {
       cwd: root,
       env,

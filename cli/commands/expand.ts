@@ -66,7 +66,7 @@ export function parseArgs(argv: string[]): Args | string {
   return out;
 }
 
-async function readText(file: string): Promise<string | null> {
+export async function readText(file: string): Promise<string | null> {
   try {
     return await readFile(file, "utf8");
   } catch (e) {
@@ -77,7 +77,7 @@ async function readText(file: string): Promise<string | null> {
   }
 }
 
-async function loadProfile(file: string): Promise<AthleteProfile | null> {
+export async function loadProfile(file: string): Promise<AthleteProfile | null> {
   const text = await readText(file);
   if (text === null) return null;
   let json: unknown;

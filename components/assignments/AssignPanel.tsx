@@ -134,7 +134,7 @@ export function AssignPanel({ athletes, selectable = false }: { athletes: Athlet
         <div className="grid gap-4 sm:grid-cols-2">
           <label className="block">
             <span className="field-label">Template</span>
-            <select className="field-input" {...form.register("templateId", { onChange: () => form.setValue("versionId", "") })} disabled={templates.isLoading}>
+            <select aria-label="Template" className="field-input" {...form.register("templateId", { onChange: () => form.setValue("versionId", "") })} disabled={templates.isLoading}>
               <option value="">{templates.isLoading ? "Loading templates…" : usable.length === 0 ? "No saved templates yet" : "Pick a template"}</option>
               {usable.map((t) => (
                 <option key={t.id} value={t.id}>{t.title}</option>
@@ -145,7 +145,7 @@ export function AssignPanel({ athletes, selectable = false }: { athletes: Athlet
           </label>
           <label className="block">
             <span className="field-label">Version</span>
-            <select className="field-input" {...form.register("versionId")} disabled={!versions.data}>
+            <select aria-label="Version" className="field-input" {...form.register("versionId")} disabled={!versions.data}>
               {!versions.data ? <option value="">{templateId ? "Loading versions…" : "Pick a template first"}</option> : null}
               {versions.data?.versions.map((v, i) => (
                 <option key={v.id} value={v.id}>

@@ -7,10 +7,16 @@ import * as m0001 from "./2026-12-01T0001_users";
 import * as m0002 from "./2026-12-01T0002_templates";
 import * as m0003 from "./2026-12-01T0003_exercises";
 import * as m0004 from "./2026-12-01T0004_athletes";
+import * as m0005 from "./2026-12-01T0005_logs";
+import * as m0006 from "./2026-12-01T0006_store";
+import * as m0007 from "./2026-12-01T0007_recipes";
 
 export const migrations: Record<string, Migration> = {
   "2026-12-01T0001_users": m0001,
   "2026-12-01T0002_templates": m0002,
   "2026-12-01T0003_exercises": m0003,
   "2026-12-01T0004_athletes": m0004,
+  "2026-12-01T0005_logs": m0005,
+  "2026-12-01T0006_store": m0006,
+  "2026-12-01T0007_recipes": m0007,
 };

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { parseAthleteProfile } from "./profile";
-import { defaultPresetFor, EQUIPMENT_PRESETS, equipmentPreset } from "./presets";
+import { defaultPresetFor, EQUIPMENT_PRESETS, equipmentPreset, matchingPreset } from "./presets";
 
 describe("equipment presets", () => {
   it("each makes a valid athlete profile", () => {
@@ -25,5 +25,13 @@ describe("equipment presets", () => {
 
   it("falls back to the kg club gym for an unknown id", () => {
     expect(equipmentPreset("moon-base").id).toBe("kg-club");
+  });
+
+  it("recognises a preset whatever the order of the plates or the key order of stored pairs", () => {
+    const home = equipmentPreset("kg-home");
+    const reordered = (home.plates as { weight: number; pairs: number }[]).map((x) => ({ pairs: x.pairs, weight: x.weight })).reverse();
+    expect(matchingPreset({ ...home, plates: reordered })).toBe("kg-home");
+    expect(matchingPreset({ ...home, plates: reordered.map((x, i) => (i === 0 ? { ...x, pairs: x.pairs + 1 } : x)) })).toBeNull();
+    expect(matchingPreset({ ...equipmentPreset("lb-club"), machineStep: 5 })).toBeNull();
   });
 });

@@ -70,3 +70,18 @@ export function equipmentPreset(id: string): EquipmentPreset {
 export function defaultPresetFor(units: "kg" | "lb"): EquipmentPreset {
   return equipmentPreset(units === "kg" ? "kg-club" : "lb-club");
 }
+
+/**
+ * The preset these values are exactly, or null once anything was changed by
+ * hand (plates compared heaviest first, so their order does not matter).
+ * @example matchingPreset({ units: "kg", bar: 20, plates: [1.25, 2.5, 5, 10, 15, 20, 25], dumbbellStep: 2, machineStep: 5 }); // "kg-club"
+ */
+export function matchingPreset(e: Omit<EquipmentPreset, "id" | "label">): EquipmentPresetId | null {
+  // Compared as [weight, pairs] pairs: jsonb does not keep an object's key order.
+  const sorted = (plates: AthleteProfile["plates"]) =>
+    JSON.stringify(plates.map((x) => (typeof x === "number" ? x : [x.weight, x.pairs])).sort((a, b) => (typeof b === "number" ? b : b[0]) - (typeof a === "number" ? a : a[0])));
+  const hit = EQUIPMENT_PRESETS.find(
+    (p) => p.units === e.units && p.bar === e.bar && p.dumbbellStep === e.dumbbellStep && p.machineStep === e.machineStep && sorted(p.plates) === sorted(e.plates),
+  );
+  return hit?.id ?? null;
+}

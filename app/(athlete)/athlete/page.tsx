@@ -38,9 +38,14 @@ export default async function AthleteToday() {
                   <SessionMeta session={s} />
                 </header>
                 <SessionPlan plan={s.plan} />
-                <Link href={`/athlete/sessions/${s.id}`} className="btn-primary mt-4 min-h-14 w-full text-lg sm:w-auto" data-testid="open-session">
-                  Open session
-                </Link>
+                <div className="mt-4 flex flex-col gap-3 sm:flex-row">
+                  <Link href={`/athlete/sessions/${s.id}/log`} className="btn-primary min-h-14 w-full text-lg sm:w-auto" data-testid="log-today">
+                    {s.completed ? "See what you logged" : "Log this session"}
+                  </Link>
+                  <Link href={`/athlete/sessions/${s.id}`} className="btn min-h-14 w-full text-lg sm:w-auto" data-testid="open-session">
+                    Session details
+                  </Link>
+                </div>
               </article>
             ))}
           </div>

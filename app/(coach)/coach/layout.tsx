@@ -11,9 +11,12 @@ export default async function CoachLayout({ children }: { children: ReactNode })
       viewerName={viewer.name}
       nav={[
         { href: "/coach", label: "Overview" },
+        { href: "/coach/dashboard", label: "Who trained" },
+        { href: "/coach/athletes", label: "Athletes" },
         { href: "/coach/templates", label: "Templates" },
         { href: "/coach/library", label: "Exercise library" },
-        { href: "/coach/athletes", label: "Athletes" },
+        { href: "/coach/recipes", label: "Recipes" },
+        { href: "/coach/sales", label: "Sales" },
         { href: "/docs/notation", label: "Notation guide" },
       ]}
     >

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { PageTitle } from "@/components/AppShell";
+import { SessionCardDownload } from "@/components/cards/CardDownload";
 import { Caution } from "@/components/Caution";
 import { MoveSession } from "@/components/session/MoveSession";
 import { SessionMeta } from "@/components/session/SessionMeta";
@@ -35,7 +36,10 @@ export default async function AthleteSessionPage({ params }: { params: Promise<{
         <SessionMeta session={session} />
       </div>
       <div className="mb-4 flex flex-wrap gap-3" data-testid="session-actions">
-        {/* Session actions: "Log this session" (→ /athlete/sessions/[id]/log) and "Download card" (→ /api/sessions/[id]/card) are added here by their owners. */}
+        <Link href={`/athlete/sessions/${session.id}/log`} className="btn-primary min-h-12 px-5 text-base" data-testid="log-session">
+          {session.completed ? "See what you logged" : "Log this session"}
+        </Link>
+        <SessionCardDownload sessionId={session.id} />
       </div>
       <Caution className="mb-4" />
       <SessionPlan plan={session.plan} />

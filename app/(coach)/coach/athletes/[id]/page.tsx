@@ -5,6 +5,9 @@ import { AssignmentList, AssignPanel } from "@/components/assignments";
 import { maxesForClient } from "@/components/athletes/format";
 import { ProfileSections } from "@/components/athletes/ProfileSections";
 import { Caution } from "@/components/Caution";
+import { EmailWeekPack } from "@/components/cards/EmailWeekPack";
+import { WeekCardsDownload } from "@/components/cards/CardDownload";
+import { todayUtc } from "@/db/recompute";
 import { findAthleteFor } from "@/db/athleteAccess";
 import { maxesView } from "@/db/athleteMaxes";
 import { getEquipment } from "@/db/athleteProfiles";
@@ -21,6 +24,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
   // Someone else's athlete looks exactly like a missing one.
   const athlete = await findAthleteFor(db, viewer, id);
   if (!athlete) notFound();
+  const today = todayUtc();
   const [equipment, maxes, names] = await Promise.all([getEquipment(db, athlete.id), maxesView(db, viewer, athlete.id), exerciseNamesFor(db, { id: athlete.id, role: "athlete" })]);
   return (
     <>
@@ -47,6 +51,16 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
         </h2>
         <AssignmentList athleteId={athlete.id} />
         <AssignPanel athletes={[{ id: athlete.id, name: athlete.name }]} />
+      </section>
+      <section aria-labelledby="cards-heading" className="panel mb-8 space-y-3 p-4">
+        <h2 id="cards-heading" className="text-lg font-semibold text-iron">
+          Session cards
+        </h2>
+        <div className="flex flex-wrap items-start gap-3">
+          <WeekCardsDownload athleteId={athlete.id} from={today} />
+          <WeekCardsDownload athleteId={athlete.id} from={today} weeks={4} />
+        </div>
+        <EmailWeekPack athleteId={athlete.id} athleteName={athlete.name} from={today} />
       </section>
       <ProfileSections athleteId={athlete.id} equipment={equipment} maxes={maxesForClient(maxes)} names={names.map((n) => ({ name: n.name, exercise: n.exercise }))} />
       <Caution className="mt-6" />

@@ -1,12 +1,14 @@
 import { notFound } from "next/navigation";
 import type { ReactNode } from "react";
 import { PageTitle } from "@/components/AppShell";
+import { ListingPanel } from "@/components/store/ListingPanel";
 import { DetailsForm } from "@/components/templates/DetailsForm";
 import { SharePanel } from "@/components/templates/SharePanel";
 import { TemplateActions } from "@/components/templates/TemplateActions";
 import { TemplateEditor } from "@/components/templates/TemplateEditor";
 import { VersionList } from "@/components/templates/VersionList";
 import { getDb } from "@/db/client";
+import { getListingForTemplate } from "@/db/listings";
 import { getDraft } from "@/db/templateDrafts";
 import { isUuid } from "@/db/templateRules";
 import { getTemplate } from "@/db/templates";
@@ -23,7 +25,7 @@ export default async function TemplatePage({ params }: { params: Promise<{ id: s
   const db = getDb();
   const template = await getTemplate(db, viewer, id);
   if (!template) notFound();
-  const [latest, draft, names] = await Promise.all([getVersion(db, viewer, id, "latest"), getDraft(db, viewer, id), exerciseNamesFor(db, viewer)]);
+  const [latest, draft, names, listing] = await Promise.all([getVersion(db, viewer, id, "latest"), getDraft(db, viewer, id), exerciseNamesFor(db, viewer), getListingForTemplate(db, viewer, id)]);
   const libraryNames = names.filter((n) => !n.builtIn).map((n) => n.name);
   // An unsaved draft newer than the latest version is what the coach was last typing.
   const text = draft && (!latest || draft.updatedAt > latest.createdAt) ? draft.source : (latest?.source ?? "");
@@ -35,12 +37,15 @@ export default async function TemplatePage({ params }: { params: Promise<{ id: s
         lead={`${latest ? `Version ${latest.number}` : "Not saved yet"}${template.archived ? " · archived" : ""}${draft && text === draft.source && latest && draft.source !== latest.source ? " · unsaved changes restored" : ""}`}
       />
       <TemplateEditor id={id} initialText={text} baseVersion={latest?.number ?? null} libraryNames={libraryNames} />
-      <div className="mt-8 grid gap-4 lg:grid-cols-3">
+      <div className="mt-8 grid gap-4 md:grid-cols-2 xl:grid-cols-4">
         <Card title="Versions">
           <VersionList templateId={id} versions={versions} />
         </Card>
         <Card title="Sharing">
           <SharePanel templateId={id} latestVersion={latest?.number ?? null} />
+        </Card>
+        <Card title="Store">
+          <ListingPanel templateId={id} listing={listing} />
         </Card>
         <Card title="Details">
           <DetailsForm id={id} initial={{ title: template.title, description: template.description, tags: template.tags, visibility: template.visibility }} />

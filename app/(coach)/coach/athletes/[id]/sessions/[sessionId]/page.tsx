@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { PageTitle } from "@/components/AppShell";
+import { SessionCardDownload } from "@/components/cards/CardDownload";
 import { Caution } from "@/components/Caution";
 import { MoveSession } from "@/components/session/MoveSession";
 import { SessionMeta } from "@/components/session/SessionMeta";
@@ -38,7 +39,10 @@ export default async function CoachSessionPage({ params }: { params: Promise<{ i
         <SessionMeta session={session} />
       </div>
       <div className="mb-4 flex flex-wrap gap-3" data-testid="session-actions">
-        {/* Session actions for the coach (e.g. "Download card" → /api/sessions/[id]/card, the logged sets) are added here by their owners. */}
+        <Link href={`/coach/athletes/${id}/log?session=${session.id}`} className="btn">
+          Logged sets
+        </Link>
+        <SessionCardDownload sessionId={session.id} />
       </div>
       <Caution className="mb-4" />
       <SessionPlan plan={session.plan} />

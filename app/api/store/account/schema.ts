@@ -1,0 +1,1 @@
+export { signUpSchema as accountBodySchema } from "@/app/(auth)/signup/schema";

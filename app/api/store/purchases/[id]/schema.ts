@@ -1,0 +1,1 @@
+export { idParamsSchema } from "../../schema";

@@ -1,0 +1,270 @@
+import { mkdtempSync, readFileSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import type { Kysely } from "kysely";
+import { PDFParse } from "pdf-parse";
+import { readStoredMessages, startSmtpFake } from "../../scripts/fakes/smtp.mjs";
+import type { Database } from "../../db/database";
+import { migrateToLatest } from "../../db/migrate";
+import { planAssignment, sessionTitle } from "../../db/recompute";
+import { createTemplate } from "../../db/templates";
+import { createUser } from "../../db/users";
+import { createScratchDb } from "../support/scratchDb";
+
+// The handlers ask for the session and the pool themselves; both are swapped here.
+const h = vi.hoisted(() => ({
+  db: null as unknown as Kysely<Database>,
+  viewer: null as null | { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" },
+}));
+vi.mock("@/server/auth", () => ({ getViewer: async () => h.viewer }));
+vi.mock("@/db/client", async (importOriginal) => ({ ...(await importOriginal<object>()), getDb: () => h.db }));
+
+const sessionCard = await import("../../app/api/sessions/[id]/card/route");
+const weekCards = await import("../../app/api/athletes/[id]/cards/route");
+
+const SOURCE = [
+  "title: Card route test",
+  "units: kg",
+  "round: 2.5",
+  "block Base 2w",
+  "day Squat day mon",
+  '  back squat 3x5 @75% ramp 50/70% rest 3m "sit between the heels"',
+  "  bench press 3x8 @80% or dumbbell bench press",
+  "day Pull day thu",
+  "  deadlift 2x5 @80%",
+  "",
+].join("\n");
+const START = "2027-01-04";
+const PUBLIC = "https://cards.example.test";
+
+type Person = { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" };
+
+async function seedAthlete(db: Kysely<Database>, coach: Person, athlete: Person) {
+  for (const [exercise, value] of [["back squat", 100], ["bench press", 80], ["deadlift", 140]] as const) {
+    await db
+      .insertInto("athlete_maxes")
+      .values({ athlete_id: athlete.id, exercise, exercise_key: exercise, kind: "1rm", value, units: "kg", measured_on: "2026-12-01", source: "tested", note: null, created_by: coach.id })
+      .execute();
+  }
+  const template = await createTemplate(db, coach, { title: "Card route test", source: SOURCE });
+  const assignment = await db
+    .insertInto("template_assignments")
+    .values({ template_id: template.id, version_id: template.version.id, athlete_id: athlete.id, assigned_by: coach.id, start_date: START, weekdays: [], ended_at: null })
+    .returning("id")
+    .executeTakeFirstOrThrow();
+  const plan = await planAssignment(db, { athleteId: athlete.id, athleteName: athlete.name, versionId: template.version.id, startDate: START, weekdays: [] });
+  const rows = await db
+    .insertInto("training_sessions")
+    .values(
+      plan.sessions.map((s, ordinal) => ({
+        assignment_id: assignment.id,
+        athlete_id: athlete.id,
+        ordinal,
+        planned_date: s.date,
+        date: s.date,
+        title: sessionTitle(s),
+        plan: JSON.stringify(s),
+        logged_at: null,
+        completed_at: null,
+      })),
+    )
+    .returning(["id", "date"])
+    .execute();
+  return rows.sort((a, b) => a.date.localeCompare(b.date));
+}
+
+async function readPdf(res: Response) {
+  const parser = new PDFParse({ data: new Uint8Array(await res.arrayBuffer()) });
+  try {
+    const text = (await parser.getText()).text.replace(/\s+/g, " ");
+    const info = await parser.getInfo({ parsePageInfo: true });
+    return { text, pages: info.pages };
+  } finally {
+    await parser.destroy();
+  }
+}
+
+const get = (url: string) => new Request(`http://ironquill.test${url}`);
+const post = (url: string, body: unknown) => new Request(`http://ironquill.test${url}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
+const params = (id: string) => ({ params: Promise.resolve({ id }) });
+
+describe("session card downloads", () => {
+  let scratch: Awaited<ReturnType<typeof createScratchDb>>;
+  let coach: Person;
+  let stranger: Person;
+  let admin: Person;
+  let tomas: Person;
+  let maya: Person;
+  let rows: { id: string; date: string }[];
+  const before = process.env.NEXTAUTH_URL;
+
+  beforeAll(async () => {
+    process.env.NEXTAUTH_URL = PUBLIC;
+    scratch = await createScratchDb();
+    await migrateToLatest(scratch.db);
+    h.db = scratch.db;
+    const mk = async (email: string, name: string, role: Person["role"], coachId: string | null = null): Promise<Person> => {
+      const u = await createUser(scratch.db, { email, name, passwordHash: "h", role, coachId });
+      return { id: u!.id, name, email, role };
+    };
+    coach = await mk("rowan@c.test", "Rowan Hale", "coach");
+    stranger = await mk("sky@c.test", "Sky Other", "coach");
+    admin = await mk("pat@c.test", "Pat Ellery", "admin");
+    tomas = await mk("tomas@c.test", "Tomas Brenner", "athlete", coach.id);
+    maya = await mk("maya@c.test", "Maya Okonjo", "athlete", stranger.id);
+    rows = await seedAthlete(scratch.db, coach, tomas);
+  });
+  afterAll(async () => {
+    if (before === undefined) delete process.env.NEXTAUTH_URL;
+    else process.env.NEXTAUTH_URL = before;
+    await scratch?.drop();
+  });
+
+  it("gives the athlete their session's card as a named PDF with loads, plates and a code to the logging page", async () => {
+    h.viewer = tomas;
+    const res = await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card`), params(rows[0].id));
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-type")).toBe("application/pdf");
+    expect(res.headers.get("content-disposition")).toMatch(/^attachment; filename="tomas-brenner-2027-01-04-squat-day\.pdf"/);
+    const { text, pages } = await readPdf(res);
+    expect(text).toContain("Tomas Brenner · Squat day · Mon 4 Jan 2027");
+    // 75 % of 100 kg = 75 kg; (75 − 20) / 2 = 27.5 = 25 + 2.5 a side (common practice, no source).
+    expect(text).toContain("3 × 5 75 kg 25 · 2.5 a side");
+    // 80 % of 80 kg = 64 → 65 kg on 2.5 kg steps; (65 − 20) / 2 = 22.5 = 20 + 2.5 a side.
+    expect(text).toContain("3 × 8 65 kg 20 · 2.5 a side");
+    expect(text).toContain("Train safe.");
+    expect(pages[0].links.map((l) => l.url)).toEqual([`${PUBLIC}/athlete/sessions/${rows[0].id}/log`]);
+  });
+
+  it("gives the coach the same card in the size asked for", async () => {
+    h.viewer = coach;
+    const res = await sessionCard.GET(get(`/api/sessions/${rows[1].id}/card?size=Letter`), params(rows[1].id));
+    expect(res.status).toBe(200);
+    const { text, pages } = await readPdf(res);
+    expect(text).toContain("Pull day · Thu 7 Jan 2027");
+    // US Letter, 8.5 × 11 in at 72 pt per inch (ANSI/ASME Y14.1).
+    expect(pages[0]).toMatchObject({ width: 612, height: 792 });
+  });
+
+  it("answers anyone else's card as not found, a wrong role 403 and no session 401", async () => {
+    for (const viewer of [stranger, maya]) {
+      h.viewer = viewer;
+      const res = await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card`), params(rows[0].id));
+      expect(res.status).toBe(404);
+      expect((await res.json()).error).toMatchObject({ code: "not_found", message: "That session does not exist or is not on your roster." });
+    }
+    h.viewer = coach;
+    const missing = await sessionCard.GET(get("/api/sessions/not-an-id/card"), params("not-an-id"));
+    expect(missing.status).toBe(404);
+    h.viewer = admin;
+    expect((await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card`), params(rows[0].id))).status).toBe(403);
+    h.viewer = null;
+    expect((await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card`), params(rows[0].id))).status).toBe(401);
+  });
+
+  it("names a bad paper size with 422", async () => {
+    h.viewer = tomas;
+    const res = await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card?size=a4`), params(rows[0].id));
+    expect(res.status).toBe(422);
+    expect((await res.json()).error.fields.size).toBe("size is a6, a5 or letter");
+  });
+
+  it("packs the ISO week holding `from`, one card per session, and names the file by that week", async () => {
+    h.viewer = coach;
+    // Wednesday 6 Jan 2027 is in ISO week 2027-W01, which runs Mon 4 – Sun 10 Jan (ISO 8601).
+    const res = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-06`), params(tomas.id));
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-disposition")).toMatch(/^attachment; filename="tomas-brenner-week-2027-W01\.pdf"/);
+    const { text, pages } = await readPdf(res);
+    expect(text).toContain("Squat day · Mon 4 Jan 2027");
+    expect(text).toContain("Pull day · Thu 7 Jan 2027");
+    expect(text).not.toContain("Jan 2027 · 2027-W02");
+    expect(pages.map((p) => p.links.map((l) => l.url)).flat()).toEqual(rows.slice(0, 2).map((r) => `${PUBLIC}/athlete/sessions/${r.id}/log`));
+    // ISO 216 A6, 105 × 148 mm, by default.
+    expect(pages[0].width).toBeCloseTo((105 * 72) / 25.4, 1);
+  });
+
+  it("packs four weeks for the athlete themself, and prints a moved session on its new day", async () => {
+    await scratch.db.updateTable("training_sessions").set({ date: "2027-01-15" }).where("id", "=", rows[3].id).execute();
+    h.viewer = tomas;
+    const res = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-04&weeks=4&size=a5`), params(tomas.id));
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-disposition")).toMatch(/filename="tomas-brenner-4-weeks-from-2027-W01\.pdf"/);
+    const { text } = await readPdf(res);
+    expect(text).toContain("Pull day · Fri 15 Jan 2027");
+    expect(text).not.toContain("Thu 14 Jan 2027");
+    expect(text.match(/Tomas Brenner · \w[\w ]* · \w{3} \d+ Jan 2027/g)?.length).toBeGreaterThanOrEqual(4);
+  });
+
+  it("keeps the pack to the athlete and their coach, and says so when a week has nothing planned", async () => {
+    for (const viewer of [stranger, maya]) {
+      h.viewer = viewer;
+      const res = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-04`), params(tomas.id));
+      expect(res.status).toBe(404);
+    }
+    h.viewer = admin;
+    expect((await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-04`), params(tomas.id))).status).toBe(403);
+    h.viewer = coach;
+    const empty = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-03-01`), params(tomas.id));
+    expect(empty.status).toBe(404);
+    expect((await empty.json()).error.message).toBe("No sessions are planned for Tomas Brenner from 2027-03-01 to 2027-03-07.");
+    const noFrom = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards`), params(tomas.id));
+    expect(noFrom.status).toBe(422);
+    expect(Object.keys((await noFrom.json()).error.fields)).toEqual(["from"]);
+    const twoWeeks = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-04&weeks=2`), params(tomas.id));
+    expect((await twoWeeks.json()).error.fields.weeks).toBe("weeks is 1 or 4");
+  });
+
+  describe("e-mailing the week's pack", () => {
+    let dir: string;
+    let fake: Awaited<ReturnType<typeof startSmtpFake>>;
+    const env: Record<string, string | undefined> = {};
+
+    beforeAll(async () => {
+      dir = mkdtempSync(join(tmpdir(), "iq-cards-mail-"));
+      fake = await startSmtpFake({ port: 0, dir });
+      const values = { SMTP_HOST: "127.0.0.1", SMTP_PORT: String(fake.port), SMTP_SECURE: "false", MAIL_FROM: "Ironquill <no-reply@ironquill.test>" };
+      for (const [k, v] of Object.entries(values)) {
+        env[k] = process.env[k];
+        process.env[k] = v;
+      }
+    });
+    afterAll(async () => {
+      await fake?.close();
+      for (const [k, v] of Object.entries(env)) {
+        if (v === undefined) delete process.env[k];
+        else process.env[k] = v;
+      }
+      rmSync(dir, { recursive: true, force: true });
+    });
+
+    it("sends the athlete the week's cards as a PDF attachment when their coach asks", async () => {
+      h.viewer = coach;
+      const res = await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "2027-01-04" }), params(tomas.id));
+      expect(res.status).toBe(200);
+      expect(await res.json()).toEqual({ sent: { to: "tomas@c.test", sessions: 2, fileName: "tomas-brenner-week-2027-W01.pdf" } });
+      const [m] = readStoredMessages(dir);
+      expect(m.to).toEqual(["tomas@c.test"]);
+      expect(m.subject).toBe("Your session cards for 4–10 Jan 2027");
+      expect(m.text).toContain("Rowan Hale sent you");
+      expect(m.text).toContain("Train safe.");
+      expect(m.attachments).toHaveLength(1);
+      expect(m.attachments[0]).toMatchObject({ filename: "tomas-brenner-week-2027-W01.pdf", contentType: "application/pdf" });
+      const attached = new Response(readFileSync(join(dir, m.attachments[0].file)));
+      const { text } = await readPdf(attached);
+      expect(text).toContain("Tomas Brenner · Squat day · Mon 4 Jan 2027");
+    });
+
+    it("lets only the coach send, and not for someone else's athlete", async () => {
+      h.viewer = tomas;
+      expect((await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "2027-01-04" }), params(tomas.id))).status).toBe(403);
+      h.viewer = stranger;
+      expect((await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "2027-01-04" }), params(tomas.id))).status).toBe(404);
+      h.viewer = coach;
+      const bad = await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "4 Jan" }), params(tomas.id));
+      expect(bad.status).toBe(422);
+      expect(readStoredMessages(dir)).toHaveLength(1);
+    });
+  });
+});
