@@ -7,8 +7,24 @@ import type { CardSize } from "../pdf/sizes";
 import { publicBaseUrl } from "../server/mail/config";
 import { sendMail } from "../server/mail/send";
 import type { Actor, Db } from "./athleteAccess";
-import { weekForCards } from "./cards";
+import { weekForCards, type WeekForCards } from "./cards";
 import { DomainError } from "./domainError";
+
+/**
+ * The pack to e-mail, refused as not found (naming `from`) when nothing is
+ * planned: checked when the coach asks, so they hear it at once, and again
+ * when the queued job runs, since sessions may move in between.
+ */
+export async function weekToSend(db: Db, actor: Actor, athleteId: string, from: string, weeks: 1 | 4): Promise<WeekForCards> {
+  const pack = await weekForCards(db, actor, athleteId, from, weeks);
+  if (pack.sessions.length === 0) {
+    const span = weeks === 1 ? `the week of ${from}` : `the 4 weeks from ${from}`;
+    throw new DomainError("not_found", `No sessions are planned for ${pack.athlete.name} in ${span} (${pack.from} to ${pack.to}), so there is nothing to send.`, {
+      from: weeks === 1 ? "No sessions in that week" : "No sessions in those weeks",
+    });
+  }
+  return pack;
+}
 
 /**
  * E-mails an athlete the week's session cards as one PDF attachment: the
@@ -28,10 +44,7 @@ export async function emailWeekPack(
   options: { weeks?: 1 | 4; size?: CardSize; senderName?: string } = {},
 ): Promise<{ to: string; sessions: number; fileName: string; messageId: string }> {
   const weeks = options.weeks ?? 1;
-  const pack = await weekForCards(db, actor, athleteId, from, weeks);
-  if (pack.sessions.length === 0) {
-    throw new DomainError("not_found", `No sessions are planned for ${pack.athlete.name} from ${pack.from} to ${pack.to}, so nothing was sent.`, { from: "No sessions in that week" });
-  }
+  const pack = await weekToSend(db, actor, athleteId, from, weeks);
   let baseUrl: string | null = null;
   try {
     baseUrl = publicBaseUrl();

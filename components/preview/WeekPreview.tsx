@@ -46,9 +46,14 @@ function ExerciseRow({ ex, units, variations, onLine }: { ex: ExerciseOut; units
     <li className="px-3 py-2" data-testid="preview-exercise">
       <div className="flex items-baseline gap-2">
         {ex.label ? <span className="font-mono text-xs font-bold text-brass-500">{ex.label}</span> : null}
-        <button type="button" onClick={() => onLine?.(ex.line)} className="text-left text-sm font-semibold text-iron first-letter:uppercase hover:text-ember-600" title="Show this line in the editor">
-          {ex.name}
-        </button>
+        {/* Only the editor can jump to a line; read-only pages render this on the server, where no handler may pass. */}
+        {onLine ? (
+          <button type="button" onClick={() => onLine(ex.line)} className="text-left text-sm font-semibold text-iron first-letter:uppercase hover:text-ember-600" title="Show this line in the editor">
+            {ex.name}
+          </button>
+        ) : (
+          <span className="text-sm font-semibold text-iron first-letter:uppercase">{ex.name}</span>
+        )}
         {extras.length ? <span className="text-xs text-iron-500">{extras.join(" · ")}</span> : null}
       </div>
       {variations && variations.length > 1 ? (

@@ -15,6 +15,7 @@ export const PGBOSS_SCHEMA = "pgboss";
 
 export const QUEUES = {
   bulkAssign: "bulk-assign",
+  cardPack: "card-pack",
 } as const;
 
 /**
@@ -23,6 +24,8 @@ export const QUEUES = {
  */
 const QUEUE_OPTIONS: Record<string, Omit<PgBoss.Queue, "name">> = {
   [QUEUES.bulkAssign]: { retryLimit: 3, retryDelay: 15, retryBackoff: true, expireInSeconds: 30 * 60 },
+  // One e-mail: a finished run is skipped on retry. The expiry stays far above render + SMTP timeouts so a slow send is never started twice.
+  [QUEUES.cardPack]: { retryLimit: 3, retryDelay: 30, retryBackoff: true, expireInSeconds: 10 * 60 },
 };
 
 export function bossOptions(url: string): PgBoss.ConstructorOptions {

@@ -3,6 +3,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import type { Kysely } from "kysely";
+import type PgBoss from "pg-boss";
 import { PDFParse } from "pdf-parse";
 import { readStoredMessages, startSmtpFake } from "../../scripts/fakes/smtp.mjs";
 import type { Database } from "../../db/database";
@@ -12,16 +13,24 @@ import { createTemplate } from "../../db/templates";
 import { createUser } from "../../db/users";
 import { createScratchDb } from "../support/scratchDb";
 
-// The handlers ask for the session and the pool themselves; both are swapped here.
+// The handlers ask for the session, the pool and the queue themselves; all three are swapped here.
 const h = vi.hoisted(() => ({
   db: null as unknown as Kysely<Database>,
   viewer: null as null | { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" },
+  boss: null as unknown as PgBoss,
 }));
 vi.mock("@/server/auth", () => ({ getViewer: async () => h.viewer }));
 vi.mock("@/db/client", async (importOriginal) => ({ ...(await importOriginal<object>()), getDb: () => h.db }));
+vi.mock("@/server/jobs/boss", async (importOriginal) => ({
+  ...(await importOriginal<object>()),
+  getBoss: async () => h.boss,
+  guardedBoss: async () => h.boss,
+}));
 
 const sessionCard = await import("../../app/api/sessions/[id]/card/route");
 const weekCards = await import("../../app/api/athletes/[id]/cards/route");
+const { startBoss } = await import("../../server/jobs/boss");
+const { handleCardPack } = await import("../../server/jobs/cardPack");
 
 const SOURCE = [
   "title: Card route test",
@@ -88,6 +97,12 @@ async function readPdf(res: Response) {
 const get = (url: string) => new Request(`http://ironquill.test${url}`);
 const post = (url: string, body: unknown) => new Request(`http://ironquill.test${url}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
 const params = (id: string) => ({ params: Promise.resolve({ id }) });
+
+function scratchUrl(name: string): string {
+  const url = new URL(process.env.IQ_TEST_DB_ADMIN_URL!);
+  url.pathname = `/${name}`;
+  return url.toString();
+}
 
 describe("session card downloads", () => {
   let scratch: Awaited<ReturnType<typeof createScratchDb>>;
@@ -224,6 +239,8 @@ describe("session card downloads", () => {
     beforeAll(async () => {
       dir = mkdtempSync(join(tmpdir(), "iq-cards-mail-"));
       fake = await startSmtpFake({ port: 0, dir });
+      // A real queue with no worker: the POST only queues, and the tests run the job's handler themselves.
+      h.boss = await startBoss(scratchUrl(scratch.name));
       const values = { SMTP_HOST: "127.0.0.1", SMTP_PORT: String(fake.port), SMTP_SECURE: "false", MAIL_FROM: "Ironquill <no-reply@ironquill.test>" };
       for (const [k, v] of Object.entries(values)) {
         env[k] = process.env[k];
@@ -231,6 +248,7 @@ describe("session card downloads", () => {
       }
     });
     afterAll(async () => {
+      await h.boss?.stop({ graceful: false, wait: true });
       await fake?.close();
       for (const [k, v] of Object.entries(env)) {
         if (v === undefined) delete process.env[k];
@@ -239,11 +257,16 @@ describe("session card downloads", () => {
       rmSync(dir, { recursive: true, force: true });
     });
 
-    it("sends the athlete the week's cards as a PDF attachment when their coach asks", async () => {
+    it("queues the e-mail when their coach asks, and its job sends the athlete the week's cards as a PDF attachment", async () => {
       h.viewer = coach;
       const res = await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "2027-01-04" }), params(tomas.id));
-      expect(res.status).toBe(200);
-      expect(await res.json()).toEqual({ sent: { to: "tomas@c.test", sessions: 2, fileName: "tomas-brenner-week-2027-W01.pdf" } });
+      expect(res.status).toBe(202);
+      const { job } = await res.json();
+      expect(job).toMatchObject({ kind: "card-pack", status: "queued", total: 1, done: 0 });
+      expect(readStoredMessages(dir)).toHaveLength(0);
+      await handleCardPack(scratch.db, { jobRunId: job.id });
+      const run = await scratch.db.selectFrom("job_runs").select(["status", "result"]).where("id", "=", job.id).executeTakeFirstOrThrow();
+      expect(run).toEqual({ status: "done", result: { to: "tomas@c.test", sessions: 2, fileName: "tomas-brenner-week-2027-W01.pdf" } });
       const [m] = readStoredMessages(dir);
       expect(m.to).toEqual(["tomas@c.test"]);
       expect(m.subject).toBe("Your session cards for 4–10 Jan 2027");
@@ -256,7 +279,9 @@ describe("session card downloads", () => {
       expect(text).toContain("Tomas Brenner · Squat day · Mon 4 Jan 2027");
     });
 
-    it("lets only the coach send, and not for someone else's athlete", async () => {
+    it("lets only the coach send, not for someone else's athlete nor an empty week, and queues nothing then", async () => {
+      const runs = async () => (await scratch.db.selectFrom("job_runs").select("id").execute()).length;
+      const queuedBefore = await runs();
       h.viewer = tomas;
       expect((await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "2027-01-04" }), params(tomas.id))).status).toBe(403);
       h.viewer = stranger;
@@ -264,6 +289,14 @@ describe("session card downloads", () => {
       h.viewer = coach;
       const bad = await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "4 Jan" }), params(tomas.id));
       expect(bad.status).toBe(422);
+      const empty = await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "2027-03-03" }), params(tomas.id));
+      expect(empty.status).toBe(404);
+      // Wednesday 3 Mar 2027 is in the ISO week Mon 1 – Sun 7 Mar (ISO 8601).
+      expect((await empty.json()).error).toMatchObject({
+        message: "No sessions are planned for Tomas Brenner in the week of 2027-03-03 (2027-03-01 to 2027-03-07), so there is nothing to send.",
+        fields: { from: "No sessions in that week" },
+      });
+      expect(await runs()).toBe(queuedBefore);
       expect(readStoredMessages(dir)).toHaveLength(1);
     });
   });
