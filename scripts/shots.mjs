@@ -13,10 +13,10 @@ mkdirSync(out, { recursive: true });
 
 const PASSWORD = "lift-heavy-2027";
 const plan = [
-  { as: null, pages: ["/", "/signin", "/signup"] },
-  { as: "coach@larchmere.test", pages: ["/coach", "/coach/templates", "/coach/athletes", "/admin"] },
-  { as: "tomas@larchmere.test", pages: ["/athlete"] },
-  { as: "admin@larchmere.test", pages: ["/admin"] },
+  { as: null, pages: ["/", "/signin", "/signup", "/store"] },
+  { as: "coach@larchmere.test", pages: ["/coach", "/coach/dashboard", "/coach/templates", "/coach/athletes", "/coach/recipes", "/coach/sales", "/admin"] },
+  { as: "tomas@larchmere.test", pages: ["/athlete", "/athlete/calendar", "/athlete/history", "/athlete/profile", "/athlete/recipes"] },
+  { as: "admin@larchmere.test", pages: ["/admin", "/admin/mailbox", "/admin/listings"] },
 ];
 const widths = [
   { name: "phone", viewport: { width: 390, height: 844 }, isMobile: true },

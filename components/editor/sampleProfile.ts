@@ -14,6 +14,8 @@ export const SAMPLE_MAXES_KG: Record<string, number> = {
   deadlift: 180,
   "romanian deadlift": 140,
   "barbell row": 90,
+  "lat pulldown": 75,
+  "cable row": 70,
 };
 
 export function sampleProfile(units: "kg" | "lb", maxes: Record<string, number>): AthleteProfile {

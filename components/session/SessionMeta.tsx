@@ -8,15 +8,12 @@ import type { SessionMetaData } from "./types";
 export function SessionMeta({ session }: { session: SessionMetaData }) {
   return (
     <div className="flex flex-wrap items-center gap-2 text-base text-iron-700" data-testid="session-meta">
-      <span className="font-semibold text-iron" data-testid="session-date">
+      <span className="w-full font-semibold text-iron" data-testid="session-date">
         {longDate(session.date)}
       </span>
-      <span aria-hidden="true">·</span>
       <span>
-        {session.block} week {session.week}
+        {session.block} week {session.week} <span aria-hidden="true">·</span> {session.templateTitle}
       </span>
-      <span aria-hidden="true">·</span>
-      <span>{session.templateTitle}</span>
       {session.deload ? <Badge className="bg-moss-100 text-moss-700">Deload</Badge> : null}
       {session.completed ? (
         <Badge className="bg-moss text-white">Done</Badge>

@@ -48,12 +48,13 @@ function ExerciseBlock({ ex, units }: { ex: ExerciseOut; units: string }) {
       {warmups.length > 0 ? (
         <div className="mt-3" data-testid="session-ramp">
           <h4 className="text-sm font-bold uppercase tracking-wider text-iron-700">Warm-up ramp</h4>
-          <ul className="mt-1 space-y-0.5 font-mono text-base text-iron">
+          {/* A grid so loads, reps and plates line up in columns and a plate list never reads as reps. */}
+          <ul className="mt-1 grid grid-cols-[auto_auto_1fr] gap-x-3 gap-y-0.5 font-mono text-base text-iron">
             {warmups.map((w, k) => (
-              <li key={k} className="flex flex-wrap gap-x-3">
+              <li key={k} className="contents">
                 <span className="font-semibold">{loadText(w, units) || "—"}</span>
                 <span>× {repsText(w)}</span>
-                {platesText(w) ? <span className="text-iron-700">{plateLabel(w)}</span> : null}
+                <span className="text-iron-700">{platesText(w) ? plateLabel(w) : ""}</span>
               </li>
             ))}
           </ul>

@@ -211,7 +211,8 @@ describe("the fakes runner", () => {
     const dir = mkdtempSync(join(tmpdir(), "iq-fakes-"));
     const port = await freePort();
     const mail = { SMTP_HOST: "127.0.0.1", SMTP_PORT: String(port), SMTP_SECURE: "false", SMTP_USER: "", MAIL_FROM: "Ironquill <no-reply@ironquill.test>", IQ_MAILBOX_DIR: dir };
-    const env = { ...process.env, ...mail };
+    // Only the mail fake here: the test run's own payment fake already holds its port.
+    const env = { ...process.env, ...mail, STRIPE_API_HOST: "" };
     const fakes = await startFakes(env);
     let restore = setEnv(mail);
     try {
@@ -235,7 +236,7 @@ describe("the fakes runner", () => {
     const dir = mkdtempSync(join(tmpdir(), "iq-fakes-"));
     const blocker = await startSmtpFake({ port: 0, dir });
     try {
-      await expect(startFakes({ ...process.env, SMTP_HOST: "127.0.0.1", SMTP_PORT: String(blocker.port), IQ_MAILBOX_DIR: dir })).rejects.toThrow(/stopped while starting/);
+      await expect(startFakes({ ...process.env, SMTP_HOST: "127.0.0.1", SMTP_PORT: String(blocker.port), IQ_MAILBOX_DIR: dir, STRIPE_API_HOST: "" })).rejects.toThrow(/stopped while starting/);
     } finally {
       await blocker.close();
       rmSync(dir, { recursive: true, force: true });

@@ -6,7 +6,7 @@ import { getDb } from "@/db/client";
 import { coachDashboard } from "@/db/dashboard";
 import { pageViewer } from "@/server/guard";
 
-export const metadata = { title: "Roster" };
+export const metadata = { title: "Who trained" };
 
 /** Who trained this week, who missed, whose sets fell short, whose lifts stalled. */
 export default async function DashboardPage() {
@@ -16,7 +16,7 @@ export default async function DashboardPage() {
   return (
     <>
       <PageTitle
-        title="Roster"
+        title="Who trained"
         lead={dashboard.rows.length === 0 ? "How your athletes' training is going." : `${dashboard.rows.length} athlete${dashboard.rows.length === 1 ? "" : "s"}; ${flagged === 0 ? "nobody needs a look right now" : `${flagged} need${flagged === 1 ? "s" : ""} a look`}.`}
       />
       {dashboard.rows.length === 0 ? (
