@@ -4,6 +4,7 @@ import { sql } from "kysely";
 import { z } from "zod";
 import { checkMinor, CURRENCIES, type Currency } from "../lib/money";
 import type { Programme } from "../lib/notation/model";
+import { slugify } from "../lib/slug";
 import type { ListingLevel, Role } from "./database";
 import { DomainError } from "./domainError";
 import { type Actor, type Db, inTransaction, requireOwnTemplate } from "./templateAccess";
@@ -115,24 +116,12 @@ export async function getListingForTemplate(db: Db, actor: Actor, templateId: st
   };
 }
 
-/** A URL name from a title: ASCII letters and digits joined by hyphens. */
-export function slugBase(title: string): string {
-  const slug = title
-    .normalize("NFKD")
-    .replace(/[\u0300-\u036f]/g, "")
-    .toLowerCase()
-    .replace(/[^a-z0-9]+/g, "-")
-    .replace(/^-+|-+$/g, "")
-    .slice(0, 60)
-    .replace(/-+$/, "");
-  return slug || "programme";
-}
-
 // Pages of the store that sit beside /store/[slug]; a listing named like one would be hidden by it.
 const RESERVED_SLUGS = new Set(["checkout", "purchases"]);
 
 async function freeSlug(db: Db, title: string): Promise<string> {
-  const base = RESERVED_SLUGS.has(slugBase(title)) ? `${slugBase(title)}-programme` : slugBase(title);
+  const stem = slugify(title, "programme");
+  const base = RESERVED_SLUGS.has(stem) ? `${stem}-programme` : stem;
   const taken = new Set(
     (await db.selectFrom("listings").select("slug").where((eb) => eb.or([eb("slug", "=", base), eb("slug", "like", `${base}-%`)])).execute()).map((r) => r.slug),
   );

@@ -12,6 +12,7 @@ import { seedStore } from "./listings";
 import { attachRecipe, createRecipe } from "./recipes";
 import type { Database, MaxSource, Role } from "./database";
 import { todayUtc } from "./recompute";
+import { logPastTraining, MAYA_HABITS, TOMAS_HABITS, type TrainingHabits } from "./seedHistory";
 import { createTemplate, updateTemplateMeta } from "./templates";
 import { saveVersion } from "./templateVersions";
 
@@ -139,31 +140,34 @@ export async function isEmpty(db: Kysely<Database>): Promise<boolean> {
   return Number(row.n) === 0;
 }
 
-type DemoMax = { exercise: string; value: number; daysAgo: number; source: MaxSource; note?: string };
+/** daysBefore counts back from the Monday of the current week, so test days fall before the block starts. */
+type DemoMax = { exercise: string; value: number; daysBefore: number; source: MaxSource; note?: string };
 
 /**
  * Each athlete's gym and maxes (Tomas in a kg club, Maya in an lb garage,
  * Lena at a kg home rack with a few lifts on file), and the coach's
- * upper/lower template for Tomas and Maya. Lena is left unassigned so the
- * coach has someone to assign on a first visit.
+ * upper/lower template for Tomas and Maya with two weeks of it logged (their
+ * habits: db/seedHistory.ts). Lena is left unassigned so the coach has
+ * someone to assign on a first visit.
  */
-const DEMO_TRAINING: { email: string; preset: EquipmentPresetId; bodyweight: number; maxes: DemoMax[]; assign: boolean }[] = [
+const DEMO_TRAINING: { email: string; preset: EquipmentPresetId; bodyweight: number; maxes: DemoMax[]; assign: boolean; habits: TrainingHabits | null }[] = [
   {
     email: "tomas@larchmere.test",
     preset: "kg-club",
     bodyweight: 82.5,
     assign: true,
+    habits: TOMAS_HABITS,
     maxes: [
-      { exercise: "back squat", value: 132.5, daysAgo: 120, source: "tested", note: "Autumn test day" },
-      { exercise: "back squat", value: 140, daysAgo: 18, source: "tested", note: "Winter test day" },
-      { exercise: "bench press", value: 100, daysAgo: 18, source: "tested", note: "Winter test day" },
-      { exercise: "deadlift", value: 180, daysAgo: 17, source: "tested", note: "Winter test day" },
-      { exercise: "incline press", value: 82.5, daysAgo: 30, source: "estimated" },
-      { exercise: "front squat", value: 112.5, daysAgo: 30, source: "estimated" },
-      { exercise: "romanian deadlift", value: 140, daysAgo: 30, source: "estimated" },
-      { exercise: "cable row", value: 80, daysAgo: 30, source: "estimated" },
-      { exercise: "chest-supported row", value: 70, daysAgo: 30, source: "estimated" },
-      { exercise: "leg curl", value: 60, daysAgo: 30, source: "estimated" },
+      { exercise: "back squat", value: 132.5, daysBefore: 120, source: "tested", note: "Autumn test day" },
+      { exercise: "back squat", value: 140, daysBefore: 18, source: "tested", note: "Winter test day" },
+      { exercise: "bench press", value: 100, daysBefore: 18, source: "tested", note: "Winter test day" },
+      { exercise: "deadlift", value: 180, daysBefore: 17, source: "tested", note: "Winter test day" },
+      { exercise: "incline press", value: 82.5, daysBefore: 30, source: "estimated" },
+      { exercise: "front squat", value: 112.5, daysBefore: 30, source: "estimated" },
+      { exercise: "romanian deadlift", value: 140, daysBefore: 30, source: "estimated" },
+      { exercise: "cable row", value: 80, daysBefore: 30, source: "estimated" },
+      { exercise: "chest-supported row", value: 70, daysBefore: 30, source: "estimated" },
+      { exercise: "leg curl", value: 60, daysBefore: 30, source: "estimated" },
     ],
   },
   {
@@ -171,13 +175,14 @@ const DEMO_TRAINING: { email: string; preset: EquipmentPresetId; bodyweight: num
     preset: "lb-garage",
     bodyweight: 148,
     assign: true,
+    habits: MAYA_HABITS,
     maxes: [
-      { exercise: "back squat", value: 225, daysAgo: 25, source: "tested" },
-      { exercise: "bench press", value: 135, daysAgo: 25, source: "tested" },
-      { exercise: "deadlift", value: 285, daysAgo: 24, source: "tested" },
-      { exercise: "incline press", value: 115, daysAgo: 40, source: "estimated" },
-      { exercise: "front squat", value: 175, daysAgo: 40, source: "estimated" },
-      { exercise: "romanian deadlift", value: 205, daysAgo: 40, source: "estimated" },
+      { exercise: "back squat", value: 225, daysBefore: 25, source: "tested" },
+      { exercise: "bench press", value: 135, daysBefore: 25, source: "tested" },
+      { exercise: "deadlift", value: 285, daysBefore: 24, source: "tested" },
+      { exercise: "incline press", value: 115, daysBefore: 40, source: "estimated" },
+      { exercise: "front squat", value: 175, daysBefore: 40, source: "estimated" },
+      { exercise: "romanian deadlift", value: 205, daysBefore: 40, source: "estimated" },
     ],
   },
   {
@@ -185,27 +190,32 @@ const DEMO_TRAINING: { email: string; preset: EquipmentPresetId; bodyweight: num
     preset: "kg-home",
     bodyweight: 64,
     assign: false,
+    habits: null,
     maxes: [
-      { exercise: "back squat", value: 85, daysAgo: 10, source: "estimated" },
-      { exercise: "bench press", value: 50, daysAgo: 10, source: "estimated" },
-      { exercise: "deadlift", value: 105, daysAgo: 10, source: "estimated" },
+      { exercise: "back squat", value: 85, daysBefore: 10, source: "estimated" },
+      { exercise: "bench press", value: 50, daysBefore: 10, source: "estimated" },
+      { exercise: "deadlift", value: 105, daysBefore: 10, source: "estimated" },
     ],
   },
 ];
 
 /**
  * Each piece is added only when the athlete has none of it yet, so running the
- * seed again changes nothing. The assignment starts on the Monday of the
- * current week (UTC, at seed time): every day of the upper/lower template is
- * tagged with its weekday (Mon, Tue, Thu, Fri), so today has a session
- * whenever today is one of those days, and the nearest one is at most two days
- * away otherwise. No weekday list is passed because no day is left untagged.
+ * seed again changes nothing. The assignment starts on the Monday two weeks
+ * before the current week's (UTC, at seed time), so weeks 1 and 2 are history
+ * and this is week 3 of the four-week block (week 4 deloads). Every day of the
+ * upper/lower template is tagged with its weekday (Mon, Tue, Thu, Fri), so
+ * today has a session whenever today is one of those days, and the nearest one
+ * is at most two days away otherwise; no weekday list is passed because no day
+ * is left untagged. Only sessions before this week's Monday are logged, so this
+ * week — its Monday "Upper heavy" first — is still there to log.
  */
 async function seedTraining(db: Kysely<Database>): Promise<void> {
   const coach = await db.selectFrom("users").select(["id", "role"]).where("email", "=", "coach@larchmere.test").executeTakeFirst();
   if (!coach) return;
   const today = todayUtc();
   const monday = addDays(today, 1 - isoWeekdayNumber(today));
+  const start = addDays(monday, -14);
   const version = await db
     .selectFrom("template_versions as v")
     .innerJoin("templates as t", "t.id", "v.template_id")
@@ -247,7 +257,7 @@ async function seedTraining(db: Kysely<Database>): Promise<void> {
             kind: "1rm" as const,
             value: m.value,
             units: p.units,
-            measured_on: addDays(today, -m.daysAgo),
+            measured_on: addDays(monday, -m.daysBefore),
             source: m.source,
             note: m.note ?? null,
             created_by: coach.id,
@@ -257,7 +267,8 @@ async function seedTraining(db: Kysely<Database>): Promise<void> {
     }
     const hasAssignment = await db.selectFrom("template_assignments").select("id").where("athlete_id", "=", athlete.id).executeTakeFirst();
     if (d.assign && version && !hasAssignment) {
-      await assignTemplate(db, coach, { versionId: version.id, athleteIds: [athlete.id], startDate: monday, weekdays: [] });
+      await assignTemplate(db, coach, { versionId: version.id, athleteIds: [athlete.id], startDate: start, weekdays: [] });
     }
+    if (d.assign && d.habits) await logPastTraining(db, athlete.id, d.habits, p, monday);
   }
 }

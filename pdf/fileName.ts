@@ -7,25 +7,13 @@
  * weekPackFileName("Tomas Brenner", "2026-W50", 1);             // "tomas-brenner-week-2026-W50.pdf"
  * weekPackFileName("Tomas Brenner", "2026-W50", 4);             // "tomas-brenner-4-weeks-from-2026-W50.pdf"
  */
+import { slugify } from "../lib/slug";
 
 /** "Tomáš Brenner-Łukasz" → "tomas-brenner-lukasz"; an empty result becomes `fallback`. */
 export function slug(text: string, fallback = "cards"): string {
-  const ascii = text
-    .normalize("NFKD")
-    .replace(/[\u0300-\u036f]/g, "")
-    // Letters that do not decompose into a base letter plus accent.
-    .replace(/[łŁ]/g, "l")
-    .replace(/[øØ]/g, "o")
-    .replace(/[đĐ]/g, "d")
-    .replace(/ß/g, "ss")
-    .replace(/[æÆ]/g, "ae")
-    .toLowerCase();
-  const s = ascii
-    .replace(/[^a-z0-9]+/g, "-")
-    .replace(/^-+|-+$/g, "")
-    .slice(0, 60)
-    .replace(/-+$/, "");
-  return s || fallback;
+  // Letters that do not decompose into a base letter plus accent (even after NFKD), spelled out so people's names keep them.
+  const spelled = text.normalize("NFKD").replace(/[łŁ]/g, "l").replace(/[øØ]/g, "o").replace(/[đĐ]/g, "d").replace(/ß/g, "ss").replace(/[æÆ]/g, "ae");
+  return slugify(spelled, fallback);
 }
 
 export function sessionCardFileName(athlete: string, date: string, day: string): string {

@@ -7,7 +7,8 @@
  * everything it started.
  */
 import { spawn, spawnSync } from "node:child_process";
-import { existsSync } from "node:fs";
+import { createHash } from "node:crypto";
+import { existsSync, readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { db, localEnv, root } from "./env.mjs";
 import { startFakes } from "./fakes.mjs";
@@ -37,8 +38,23 @@ const bin = (name) => join(root, "node_modules/.bin", name);
 
 step("migrating the database", bin("tsx"), ["scripts/migrate.ts"], env);
 step("seeding the demo if the database is empty", bin("tsx"), ["--conditions=react-server", "scripts/seed.ts", "--if-empty"], env);
-if (!dev && (rebuild || !existsSync(join(root, ".next/BUILD_ID")))) {
+// A build made from other sources (an older commit, or edits since) is rebuilt, so a pull
+// followed by `npm start` never serves yesterday's app.
+const stamp = join(root, ".next/IQ_SOURCE");
+const source = sourceFingerprint();
+const built = existsSync(join(root, ".next/BUILD_ID")) && (source === "" || (existsSync(stamp) && readFileSync(stamp, "utf8") === source));
+if (!dev && (rebuild || !built)) {
   step("building the app (first start takes a minute or two)", "npm", ["run", "-s", "build"], { ...env, NODE_ENV: "production" });
+  if (source) writeFileSync(stamp, source);
+}
+
+/** The commit plus any uncommitted changes, or "" outside a git checkout (then a build is kept). */
+function sourceFingerprint() {
+  const git = (args) => spawnSync("git", args, { cwd: root, encoding: "utf8" });
+  const head = git(["rev-parse", "HEAD"]);
+  if (head.status !== 0) return "";
+  const dirty = git(["status", "--porcelain", "--untracked-files=normal"]).stdout ?? "";
+  return createHash("sha256").update(head.stdout).update(dirty).digest("hex");
 }
 
 process.stdout.write(`• starting the local mail catcher on 127.0.0.1:${env.SMTP_PORT}\n`);

@@ -13,12 +13,10 @@
  * // npm run -s iq -- cards templates/upper-lower.iq --athlete lib/load/fixtures/kg-gym.json --start 2027-01-04 --week 1 --size a5 --out cards.pdf
  */
 import { writeFile } from "node:fs/promises";
-import { parseProgramme } from "../../lib/notation/index";
-import { WEEKDAYS, type Weekday } from "../../lib/notation/model";
-import { isDateString } from "../../lib/dates/date";
+import type { Weekday } from "../../lib/notation/model";
 import { expandProgramme } from "../../lib/load/index";
 import { CARD_SIZES, isCardSize, type CardSize } from "../../pdf/sizes";
-import { loadProfile, readText } from "./expand";
+import { diagnosticLine, parseDays, parseProgrammeOptions, readProgrammeFor } from "./programmeInput";
 
 const USAGE = "usage: iq cards FILE --athlete PROFILE.json --start YYYY-MM-DD [--week N] [--days mon,wed,fri] [--size a6|a5|letter] --out cards.pdf";
 
@@ -34,30 +32,14 @@ export interface CardsArgs {
 
 /** Parse the command line; a string is the one-line reason it is wrong. */
 export function parseArgs(argv: string[]): CardsArgs | string {
-  const files: string[] = [];
-  const opts = new Map<string, string>();
-  for (let i = 0; i < argv.length; i++) {
-    const a = argv[i];
-    if (a.startsWith("--")) {
-      const eq = a.indexOf("=");
-      const key = eq > 0 ? a.slice(2, eq) : a.slice(2);
-      if (!["athlete", "start", "week", "days", "size", "out"].includes(key)) return `unknown option --${key}`;
-      const value = eq > 0 ? a.slice(eq + 1) : argv[++i];
-      if (value === undefined || value === "") return `--${key} needs a value`;
-      opts.set(key, value);
-    } else files.push(a);
-  }
-  if (files.length !== 1) return files.length === 0 ? "a programme FILE is required" : `one programme FILE at a time (got ${files.length})`;
-  const athlete = opts.get("athlete");
-  if (!athlete) return "--athlete PROFILE.json is required";
-  const start = opts.get("start");
-  if (!start) return "--start YYYY-MM-DD is required";
-  if (!isDateString(start)) return `--start: "${start}" is not a date written YYYY-MM-DD`;
+  const parsed = parseProgrammeOptions(argv, ["week", "size", "out"]);
+  if (typeof parsed === "string") return parsed;
+  const { base, opts } = parsed;
   const out = opts.get("out");
   if (!out) return "--out FILE.pdf is required (or --out - for stdout)";
   const size = (opts.get("size") ?? "a6").toLowerCase();
   if (!isCardSize(size)) return `--size: "${opts.get("size")}" is not one of ${CARD_SIZES.join(", ")}`;
-  const args: CardsArgs = { file: files[0], athlete, start, size, out };
+  const args: CardsArgs = { ...base, size, out };
   const week = opts.get("week");
   if (week !== undefined) {
     if (!/^\d+$/.test(week) || Number(week) < 1) return `--week: "${week}" is not a programme week (1, 2, …)`;
@@ -65,10 +47,9 @@ export function parseArgs(argv: string[]): CardsArgs | string {
   }
   const days = opts.get("days");
   if (days !== undefined) {
-    const list = days.split(",").map((d) => d.trim().toLowerCase());
-    const bad = list.find((d) => !(WEEKDAYS as readonly string[]).includes(d.slice(0, 3)) || !/^[a-z]+$/.test(d));
-    if (bad !== undefined) return `--days: "${bad}" is not a weekday (use mon,tue,wed,thu,fri,sat,sun)`;
-    args.days = list.map((d) => d.slice(0, 3)) as Weekday[];
+    const list = parseDays(days);
+    if (typeof list === "string") return list;
+    args.days = list;
   }
   return args;
 }
@@ -83,17 +64,12 @@ export async function run(argv: string[]): Promise<number> {
     console.error(`iq cards: ${args}\n${USAGE}`);
     return 2;
   }
-  const source = await readText(args.file);
-  if (source === null) return 2;
-  const athlete = await loadProfile(args.athlete);
-  if (athlete === null) return 2;
-
-  const { programme, diagnostics } = parseProgramme(source);
-  for (const d of diagnostics) console.error(`${args.file}:${d.line}:${d.column}: ${d.severity}: ${d.message}`);
-  if (diagnostics.some((d) => d.severity === "error")) return 1;
+  const input = await readProgrammeFor(args.file, args.athlete);
+  if (typeof input === "number") return input;
+  const { programme, athlete } = input;
 
   const result = expandProgramme(programme, athlete, { start: args.start, ...(args.days ? { days: args.days } : {}) });
-  for (const d of result.diagnostics) console.error(`${args.file}${d.line !== null ? `:${d.line}:1` : ""}: ${d.severity}: ${d.message}`);
+  for (const d of result.diagnostics) console.error(diagnosticLine(args.file, d));
   if (result.diagnostics.some((d) => d.severity === "error")) return 1;
 
   const weeks = Math.max(0, ...result.sessions.map((s) => s.weekInProgramme));

@@ -9,12 +9,10 @@
  * @example
  * // npm run -s iq -- expand templates/upper-lower.iq --athlete lib/load/fixtures/kg-gym.json --start 2027-01-04 --json
  */
-import { readFile } from "node:fs/promises";
-import { parseProgramme } from "../../lib/notation/index";
-import { WEEKDAYS, type Weekday } from "../../lib/notation/model";
-import { parseAthleteProfile, type AthleteProfile } from "../../lib/athlete/profile";
-import { isDateString } from "../../lib/dates/date";
-import { expandProgramme, type ExpandDiagnostic, type Session, type SetOut } from "../../lib/load/index";
+import type { Weekday } from "../../lib/notation/model";
+import type { AthleteProfile } from "../../lib/athlete/profile";
+import { expandProgramme, type Session, type SetOut } from "../../lib/load/index";
+import { diagnosticLine, parseDays, parseProgrammeOptions, readProgrammeFor } from "./programmeInput";
 
 const USAGE = "usage: iq expand FILE --athlete PROFILE.json --start YYYY-MM-DD [--days mon,wed,fri] [--weeks N] [--json]";
 
@@ -29,34 +27,15 @@ interface Args {
 
 /** Parse the command line; a string is the one-line reason it is wrong. */
 export function parseArgs(argv: string[]): Args | string {
-  const files: string[] = [];
-  const opts = new Map<string, string>();
-  let json = false;
-  for (let i = 0; i < argv.length; i++) {
-    const a = argv[i];
-    if (a === "--json") json = true;
-    else if (a.startsWith("--")) {
-      const eq = a.indexOf("=");
-      const key = eq > 0 ? a.slice(2, eq) : a.slice(2);
-      if (!["athlete", "start", "days", "weeks"].includes(key)) return `unknown option --${key}`;
-      const value = eq > 0 ? a.slice(eq + 1) : argv[++i];
-      if (value === undefined || value === "") return `--${key} needs a value`;
-      opts.set(key, value);
-    } else files.push(a);
-  }
-  if (files.length !== 1) return files.length === 0 ? "a programme FILE is required" : `one programme FILE at a time (got ${files.length})`;
-  const athlete = opts.get("athlete");
-  if (!athlete) return "--athlete PROFILE.json is required";
-  const start = opts.get("start");
-  if (!start) return "--start YYYY-MM-DD is required";
-  if (!isDateString(start)) return `--start: "${start}" is not a date written YYYY-MM-DD`;
-  const out: Args = { file: files[0], athlete, start, json };
+  const parsed = parseProgrammeOptions(argv, ["weeks"], ["json"]);
+  if (typeof parsed === "string") return parsed;
+  const { base, opts, flags } = parsed;
+  const out: Args = { ...base, json: flags.has("json") };
   const days = opts.get("days");
   if (days !== undefined) {
-    const list = days.split(",").map((d) => d.trim().toLowerCase().slice(0, 3));
-    const bad = days.split(",").find((d, i) => !(WEEKDAYS as readonly string[]).includes(list[i]) || !/^[a-z]+$/i.test(d.trim()));
-    if (bad !== undefined) return `--days: "${bad.trim()}" is not a weekday (use mon,tue,wed,thu,fri,sat,sun)`;
-    out.days = list as Weekday[];
+    const list = parseDays(days);
+    if (typeof list === "string") return list;
+    out.days = list;
   }
   const weeks = opts.get("weeks");
   if (weeks !== undefined) {
@@ -64,35 +43,6 @@ export function parseArgs(argv: string[]): Args | string {
     out.weeks = Number(weeks);
   }
   return out;
-}
-
-export async function readText(file: string): Promise<string | null> {
-  try {
-    return await readFile(file, "utf8");
-  } catch (e) {
-    const code = (e as NodeJS.ErrnoException).code;
-    const why = code === "ENOENT" ? "no such file" : code === "EISDIR" ? "is a directory" : code === "EACCES" ? "permission denied" : "cannot be read";
-    console.error(`${file}: ${why}`);
-    return null;
-  }
-}
-
-export async function loadProfile(file: string): Promise<AthleteProfile | null> {
-  const text = await readText(file);
-  if (text === null) return null;
-  let json: unknown;
-  try {
-    json = JSON.parse(text);
-  } catch (e) {
-    console.error(`${file}: not valid JSON (${e instanceof Error ? e.message : String(e)})`);
-    return null;
-  }
-  const r = parseAthleteProfile(json);
-  if (!r.ok) {
-    for (const err of r.errors) console.error(`${file}: ${err}`);
-    return null;
-  }
-  return r.profile;
 }
 
 const n = (x: number) => String(Math.round(x * 1000) / 1000);
@@ -158,24 +108,15 @@ function print(text: string): Promise<void> {
   });
 }
 
-function diagnosticLine(file: string, d: ExpandDiagnostic): string {
-  return `${file}${d.line !== null ? `:${d.line}:1` : ""}: ${d.severity}: ${d.message}`;
-}
-
 export async function run(argv: string[]): Promise<number> {
   const args = parseArgs(argv);
   if (typeof args === "string") {
     console.error(`iq expand: ${args}\n${USAGE}`);
     return 2;
   }
-  const source = await readText(args.file);
-  if (source === null) return 2;
-  const athlete = await loadProfile(args.athlete);
-  if (athlete === null) return 2;
-
-  const { programme, diagnostics } = parseProgramme(source);
-  for (const d of diagnostics) console.error(`${args.file}:${d.line}:${d.column}: ${d.severity}: ${d.message}`);
-  if (diagnostics.some((d) => d.severity === "error")) return 1;
+  const input = await readProgrammeFor(args.file, args.athlete);
+  if (typeof input === "number") return input;
+  const { programme, athlete } = input;
 
   const result = expandProgramme(programme, athlete, { start: args.start, days: args.days, weeks: args.weeks });
   for (const d of result.diagnostics) console.error(diagnosticLine(args.file, d));

@@ -1,5 +1,5 @@
 /**
- * A labelled input for the server-action forms of the sign-in pages (invitation, password reset):
+ * A labelled input for the server-action forms of the sign-in pages (sign-up, invitation, password reset):
  * the error, else the hint, is tied to the input for screen readers.
  */
 export function FormField(props: {

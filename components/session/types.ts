@@ -1,13 +1,4 @@
-/** What the session heading shows; db/sessions SessionSummary has these fields. */
-export type SessionMetaData = {
-  id: string;
-  date: string;
-  plannedDate: string;
-  title: string;
-  block: string;
-  week: number;
-  deload: boolean;
-  logged: boolean;
-  completed: boolean;
-  templateTitle: string;
-};
+import type { SessionSummary } from "@/db/sessions";
+
+/** What the session heading shows: the part of db/sessions SessionSummary it reads. */
+export type SessionMetaData = Pick<SessionSummary, "id" | "date" | "plannedDate" | "title" | "block" | "week" | "deload" | "logged" | "completed" | "templateTitle">;

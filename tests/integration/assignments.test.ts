@@ -1,14 +1,14 @@
 import { sql, type Kysely } from "kysely";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import type { Database } from "../../db/database";
-import { migrateToLatest } from "../../db/migrate";
-import { createUser } from "../../db/users";
-import { createScratchDb } from "../support/scratchDb";
+import { domainFailure } from "../support/failures";
+import { addPerson, migratedScratchDb, type Person } from "../support/people";
+import { get, params, post } from "../support/requests";
 
 // The handlers ask for the session and the pool themselves; both are swapped here.
 const h = vi.hoisted(() => ({
   db: null as unknown as Kysely<Database>,
-  viewer: null as null | { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" },
+  viewer: null as null | Person,
 }));
 vi.mock("@/server/auth", () => ({ getViewer: async () => h.viewer }));
 vi.mock("@/db/client", async (importOriginal) => ({ ...(await importOriginal<object>()), getDb: () => h.db }));
@@ -18,13 +18,11 @@ const { applyUpgrade, previewUpgrade } = await import("../../db/assignmentUpgrad
 const { createTemplate } = await import("../../db/templates");
 const { saveVersion } = await import("../../db/templateVersions");
 const { insertVersion, programmeForVersion } = await import("../../db/templateVersions");
-const { DomainError } = await import("../../db/domainError");
 const { exerciseKey } = await import("../../lib/exercises/resolve");
 const assignments = await import("../../app/api/assignments/route");
 const upgradeRoute = await import("../../app/api/assignments/[id]/upgrade/route");
 
 type Actor = { id: string; role: "coach" | "athlete" };
-type Viewer = NonNullable<typeof h.viewer>;
 
 // Two weeks, two tagged days: four sessions. 2027-01-04 is a Monday (ISO 8601 week 2027-W01).
 const V1 = `title: Assign test
@@ -40,25 +38,11 @@ day B thu
 const V2 = V1.replace("bench press 3x5", "bench press 4x5").replace("  lateral raise 3x15 6kg\n", "  leg curl 3x12 40kg\n");
 const START = "2027-01-04";
 
-const post = (url: string, body: unknown) => new Request(`http://ironquill.test${url}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-const get = (url: string) => new Request(`http://ironquill.test${url}`);
-const params = <T extends object>(p: T) => ({ params: Promise.resolve(p) });
-
-async function failure(p: Promise<unknown>): Promise<InstanceType<typeof DomainError>> {
-  try {
-    await p;
-  } catch (err) {
-    if (err instanceof DomainError) return err;
-    throw err;
-  }
-  throw new Error("expected the call to fail");
-}
-
 describe("assigning template versions to athletes", () => {
-  let scratch: Awaited<ReturnType<typeof createScratchDb>>;
+  let scratch: Awaited<ReturnType<typeof migratedScratchDb>>;
   let db: Kysely<Database>;
-  let coach: Viewer;
-  let sky: Viewer;
+  let coach: Person;
+  let sky: Person;
   const ids = {} as Record<"tomas" | "maya" | "lena" | "skyAthlete" | "solo", string>;
   let v1: string;
   let v2: string;
@@ -67,19 +51,17 @@ describe("assigning template versions to athletes", () => {
     db.selectFrom("training_sessions").selectAll().where("assignment_id", "=", assignmentId).orderBy("ordinal").execute();
 
   beforeAll(async () => {
-    scratch = await createScratchDb();
+    scratch = await migratedScratchDb();
     db = scratch.db;
     h.db = db;
-    await migrateToLatest(db);
-    const user = async (email: string, role: Viewer["role"], coachId: string | null = null) =>
-      (await createUser(db, { email, name: email.split("@")[0], passwordHash: "h", role, coachId }))!.id;
-    coach = { id: await user("rowan@a.test", "coach"), name: "rowan", email: "rowan@a.test", role: "coach" };
-    sky = { id: await user("sky@a.test", "coach"), name: "sky", email: "sky@a.test", role: "coach" };
-    ids.tomas = await user("tomas@a.test", "athlete", coach.id);
-    ids.maya = await user("maya@a.test", "athlete", coach.id);
-    ids.lena = await user("lena@a.test", "athlete", coach.id);
-    ids.skyAthlete = await user("ira@a.test", "athlete", sky.id);
-    ids.solo = await user("solo@a.test", "athlete");
+    const user = async (email: string, role: Person["role"], coachId: string | null = null) => addPerson(db, email, email.split("@")[0], role, coachId);
+    coach = await user("rowan@a.test", "coach");
+    sky = await user("sky@a.test", "coach");
+    ids.tomas = (await user("tomas@a.test", "athlete", coach.id)).id;
+    ids.maya = (await user("maya@a.test", "athlete", coach.id)).id;
+    ids.lena = (await user("lena@a.test", "athlete", coach.id)).id;
+    ids.skyAthlete = (await user("ira@a.test", "athlete", sky.id)).id;
+    ids.solo = (await user("solo@a.test", "athlete")).id;
     await db
       .insertInto("athlete_profiles")
       .values({ user_id: ids.tomas, units: "kg", bodyweight: 82, bar: 20, plates: JSON.stringify([25, 20, 15, 10, 5, 2.5, 1.25]), dumbbell_step: 2, machine_step: 5, preset: "kg-club", updated_by: coach.id })
@@ -159,7 +141,7 @@ describe("assigning template versions to athletes", () => {
   });
 
   it("answers not_found when another coach uses my template, or I assign to their athlete", async () => {
-    const theirs = await failure(assignTemplate(db, sky, { versionId: v1, athleteIds: [ids.skyAthlete], startDate: START, weekdays: [] }));
+    const theirs = await domainFailure(assignTemplate(db, sky, { versionId: v1, athleteIds: [ids.skyAthlete], startDate: START, weekdays: [] }));
     expect(theirs.code).toBe("not_found");
     h.viewer = sky;
     const viaRoute = await assignments.POST(post("/api/assignments", { versionId: v1, athleteIds: [ids.skyAthlete], startDate: START }));
@@ -186,7 +168,7 @@ describe("assigning template versions to athletes", () => {
     expect(other.outcomes[0]).toMatchObject({ status: "failed", error: { code: "not_found" } });
     // A coach's template is not the athlete's to hand out, even to themself.
     const coached: Actor = { id: ids.tomas, role: "athlete" };
-    expect((await failure(assignTemplate(db, coached, { versionId: v1, athleteIds: [ids.tomas], startDate: START, weekdays: [] }))).code).toBe("not_found");
+    expect((await domainFailure(assignTemplate(db, coached, { versionId: v1, athleteIds: [ids.tomas], startDate: START, weekdays: [] }))).code).toBe("not_found");
   });
 
   it("previews an upgrade session by session and applies it without touching past or logged sessions", async () => {
@@ -210,9 +192,9 @@ describe("assigning template versions to athletes", () => {
     ]);
     expect(await sessionsOf(id)).toEqual(before);
 
-    const older = await failure(previewUpgrade(db, coach, id, v1, { today }));
+    const older = await domainFailure(previewUpgrade(db, coach, id, v1, { today }));
     expect([older.code, Object.keys(older.fields)]).toEqual(["invalid_input", ["versionId"]]);
-    expect((await failure(previewUpgrade(db, sky, id, v2, { today }))).code).toBe("not_found");
+    expect((await domainFailure(previewUpgrade(db, sky, id, v2, { today }))).code).toBe("not_found");
 
     const applied = await applyUpgrade(db, coach, id, v2, { today });
     expect([applied.version.number, applied.rewritten, applied.dropped, applied.kept]).toEqual([2, 2, 0, 2]);
@@ -228,7 +210,7 @@ describe("assigning template versions to athletes", () => {
     const made = await assignTemplate(db, coach, { versionId: v1, athleteIds: [ids.maya], startDate: START, weekdays: [] });
     const id = made.outcomes[0].status === "assigned" ? made.outcomes[0].assignmentId : "";
     await db.updateTable("training_sessions").set({ logged_at: new Date() }).where("assignment_id", "=", id).where("ordinal", "=", 2).execute();
-    expect((await failure(endAssignment(db, sky, id, { today: "2027-01-08" }))).code).toBe("not_found");
+    expect((await domainFailure(endAssignment(db, sky, id, { today: "2027-01-08" }))).code).toBe("not_found");
     const ended = await endAssignment(db, coach, id, { today: "2027-01-08" });
     expect([ended.removedSessions, ended.keptSessions]).toEqual([1, 3]);
     expect((await sessionsOf(id)).map((r) => r.ordinal)).toEqual([0, 1, 2]);

@@ -2,18 +2,18 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import type { Kysely } from "kysely";
 import type { Database } from "../../db/database";
 import { createExercise } from "../../db/exercises";
-import { migrateToLatest } from "../../db/migrate";
 import { planAssignment, sessionTitle, todayUtc } from "../../db/recompute";
 import { createTemplate } from "../../db/templates";
-import { createUser } from "../../db/users";
 import { addDays } from "../../lib/dates/date";
 import type { Session } from "../../lib/load/types";
-import { createScratchDb } from "../support/scratchDb";
+import { addPerson, migratedScratchDb, type Person } from "../support/people";
+import { params, request, TEST_ORIGIN } from "../support/requests";
+import { insertAssignment } from "../support/training";
 
 // The handlers ask for the session and the pool themselves; both are swapped here.
 const h = vi.hoisted(() => ({
   db: null as unknown as Kysely<Database>,
-  viewer: null as null | { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" },
+  viewer: null as null | Person,
 }));
 vi.mock("@/server/auth", () => ({ getViewer: async () => h.viewer }));
 vi.mock("@/db/client", async (importOriginal) => ({ ...(await importOriginal<object>()), getDb: () => h.db }));
@@ -24,52 +24,37 @@ const maxes = await import("../../app/api/athletes/[id]/maxes/route");
 const oneMax = await import("../../app/api/athletes/[id]/maxes/[maxId]/route");
 const csv = await import("../../app/api/athletes/[id]/maxes/csv/route");
 
-const URL_BASE = "http://ironquill.test";
 const SOURCE = "title: Profile test\nday A mon\n  back squat 3x5 @75%\nday B thu\n  back squat 3x5 @75%\n";
 const KG_CLUB = { units: "kg", bodyweight: 82.5, bar: 20, plates: [25, 20, 15, 10, 5, 2.5, 1.25], dumbbellStep: 2, machineStep: 5 };
 
-function req(method: string, url: string, body?: unknown): Request {
-  return new Request(URL_BASE + url, {
-    method,
-    headers: { "content-type": "application/json" },
-    body: body === undefined ? undefined : typeof body === "string" ? body : JSON.stringify(body),
-  });
-}
 function csvText(mode: string, text: string): Request {
-  return new Request(`${URL_BASE}/api/athletes/x/maxes/csv?mode=${mode}`, { method: "POST", headers: { "content-type": "text/csv" }, body: text });
+  return new Request(`${TEST_ORIGIN}/api/athletes/x/maxes/csv?mode=${mode}`, { method: "POST", headers: { "content-type": "text/csv" }, body: text });
 }
 function csvFile(mode: string, text: string, name = "maxes.csv"): Request {
   const form = new FormData();
   form.append("file", new File([text], name, { type: "text/csv" }));
-  return new Request(`${URL_BASE}/api/athletes/x/maxes/csv?mode=${mode}`, { method: "POST", body: form });
+  return new Request(`${TEST_ORIGIN}/api/athletes/x/maxes/csv?mode=${mode}`, { method: "POST", body: form });
 }
-const params = <T extends object>(p: T) => ({ params: Promise.resolve(p) });
-type Person = NonNullable<typeof h.viewer>;
 
 const daysAgo = (n: number) => addDays(todayUtc(), -n);
 const firstWorkLoad = (s: Session) => s.exercises[0].sets.find((x) => x.kind === "work")?.load ?? null;
 
 describe("athlete profile through the route handlers", () => {
-  let scratch: Awaited<ReturnType<typeof createScratchDb>>;
+  let scratch: Awaited<ReturnType<typeof migratedScratchDb>>;
   let coach: Person, otherCoach: Person, admin: Person, tomas: Person, maya: Person, lena: Person;
 
   const countMaxes = async (athleteId: string) =>
     Number((await scratch.db.selectFrom("athlete_maxes").select((eb) => eb.fn.countAll().as("n")).where("athlete_id", "=", athleteId).executeTakeFirstOrThrow()).n);
 
   beforeAll(async () => {
-    scratch = await createScratchDb();
-    await migrateToLatest(scratch.db);
+    scratch = await migratedScratchDb();
     h.db = scratch.db;
-    const person = async (email: string, name: string, role: Person["role"], coachId: string | null = null): Promise<Person> => {
-      const u = await createUser(scratch.db, { email, name, passwordHash: "h", role, coachId });
-      return { id: u!.id, name, email, role };
-    };
-    coach = await person("coach@larchmere.test", "Rowan Hale", "coach");
-    otherCoach = await person("other@larchmere.test", "Other Coach", "coach");
-    admin = await person("admin@larchmere.test", "Pat Ellery", "admin");
-    tomas = await person("tomas@larchmere.test", "Tomas Brenner", "athlete", coach.id);
-    maya = await person("maya@larchmere.test", "Maya Okonjo", "athlete", coach.id);
-    lena = await person("lena@larchmere.test", "Lena Fisk", "athlete", otherCoach.id);
+    coach = await addPerson(scratch.db, "coach@larchmere.test", "Rowan Hale", "coach");
+    otherCoach = await addPerson(scratch.db, "other@larchmere.test", "Other Coach", "coach");
+    admin = await addPerson(scratch.db, "admin@larchmere.test", "Pat Ellery", "admin");
+    tomas = await addPerson(scratch.db, "tomas@larchmere.test", "Tomas Brenner", "athlete", coach.id);
+    maya = await addPerson(scratch.db, "maya@larchmere.test", "Maya Okonjo", "athlete", coach.id);
+    lena = await addPerson(scratch.db, "lena@larchmere.test", "Lena Fisk", "athlete", otherCoach.id);
   });
   afterAll(async () => {
     await scratch?.drop();
@@ -77,58 +62,58 @@ describe("athlete profile through the route handlers", () => {
 
   it("answers 401 without a session and 403 for an admin", async () => {
     h.viewer = null;
-    expect((await overview.GET(req("GET", ""), params({ id: tomas.id }))).status).toBe(401);
+    expect((await overview.GET(request("GET", ""), params({ id: tomas.id }))).status).toBe(401);
     h.viewer = admin;
-    const res = await overview.GET(req("GET", ""), params({ id: tomas.id }));
+    const res = await overview.GET(request("GET", ""), params({ id: tomas.id }));
     expect(res.status).toBe(403);
     expect((await res.json()).error.code).toBe("forbidden");
   });
 
   it("shows the athlete to their coach and to themself, and to no one else", async () => {
     h.viewer = coach;
-    const res = await overview.GET(req("GET", ""), params({ id: tomas.id }));
+    const res = await overview.GET(request("GET", ""), params({ id: tomas.id }));
     expect(res.status).toBe(200);
     expect(await res.json()).toMatchObject({ athlete: { name: "Tomas Brenner", email: "tomas@larchmere.test" }, equipment: { units: "kg", stored: false }, maxes: [] });
     h.viewer = tomas;
-    expect((await overview.GET(req("GET", ""), params({ id: tomas.id }))).status).toBe(200);
+    expect((await overview.GET(request("GET", ""), params({ id: tomas.id }))).status).toBe(200);
 
     for (const [viewer, id] of [[otherCoach, tomas.id], [tomas, maya.id], [coach, lena.id], [coach, "not-a-uuid"]] as const) {
       h.viewer = viewer;
-      const r = await overview.GET(req("GET", ""), params({ id }));
+      const r = await overview.GET(request("GET", ""), params({ id }));
       expect(r.status).toBe(404);
       expect((await r.json()).error.code).toBe("not_found");
     }
     h.viewer = otherCoach;
-    expect((await maxes.POST(req("POST", "", { exercise: "squat", value: 100, unit: "kg", date: daysAgo(1) }), params({ id: tomas.id }))).status).toBe(404);
-    expect((await equipment.PUT(req("PUT", "", KG_CLUB), params({ id: tomas.id }))).status).toBe(404);
+    expect((await maxes.POST(request("POST", "", { exercise: "squat", value: 100, unit: "kg", date: daysAgo(1) }), params({ id: tomas.id }))).status).toBe(404);
+    expect((await equipment.PUT(request("PUT", "", KG_CLUB), params({ id: tomas.id }))).status).toBe(404);
     expect((await csv.POST(csvText("apply", "exercise,value,unit,date\nsquat,100,kg,2026-01-01\n"), params({ id: tomas.id }))).status).toBe(404);
     expect(await countMaxes(tomas.id)).toBe(0);
   });
 
   it("saves equipment for the athlete or the coach and names each bad field with a 422", async () => {
     h.viewer = tomas;
-    const saved = await equipment.PUT(req("PUT", "", { ...KG_CLUB, plates: [1.25, 2.5, 5, 10, 15, 20, 25] }), params({ id: tomas.id }));
+    const saved = await equipment.PUT(request("PUT", "", { ...KG_CLUB, plates: [1.25, 2.5, 5, 10, 15, 20, 25] }), params({ id: tomas.id }));
     expect(saved.status).toBe(200);
     expect(await saved.json()).toMatchObject({ equipment: { units: "kg", bodyweight: 82.5, plates: [25, 20, 15, 10, 5, 2.5, 1.25], preset: "kg-club", stored: true }, recomputed: 0 });
 
     h.viewer = coach;
-    const limited = await equipment.PUT(req("PUT", "", { ...KG_CLUB, plates: [{ weight: 20, pairs: 3 }, { weight: 5, pairs: 2 }] }), params({ id: tomas.id }));
+    const limited = await equipment.PUT(request("PUT", "", { ...KG_CLUB, plates: [{ weight: 20, pairs: 3 }, { weight: 5, pairs: 2 }] }), params({ id: tomas.id }));
     expect((await limited.json()).equipment).toMatchObject({ plates: [{ weight: 20, pairs: 3 }, { weight: 5, pairs: 2 }], preset: null });
 
     // A bar of 150 would break the table's own check; it must come back as a message, not a 500.
-    const bad = await equipment.PUT(req("PUT", "", { ...KG_CLUB, bar: 150, plates: [{ weight: 20, pairs: 2 }, { weight: 10, pairs: 1.5 }] }), params({ id: tomas.id }));
+    const bad = await equipment.PUT(request("PUT", "", { ...KG_CLUB, bar: 150, plates: [{ weight: 20, pairs: 2 }, { weight: 10, pairs: 1.5 }] }), params({ id: tomas.id }));
     expect(bad.status).toBe(422);
     const { error } = await bad.json();
     expect(error.code).toBe("invalid_input");
     expect(error.fields).toMatchObject({ bar: "must be at most 100", "plates.1.pairs": "expected a whole number" });
-    expect((await equipment.PUT(req("PUT", "", { ...KG_CLUB, colour: "red" }), params({ id: tomas.id }))).status).toBe(422);
-    expect((await equipment.PUT(req("PUT", "", '{"units": "kg",'), params({ id: tomas.id }))).status).toBe(422);
+    expect((await equipment.PUT(request("PUT", "", { ...KG_CLUB, colour: "red" }), params({ id: tomas.id }))).status).toBe(422);
+    expect((await equipment.PUT(request("PUT", "", '{"units": "kg",'), params({ id: tomas.id }))).status).toBe(422);
   });
 
   it("adds maxes under the exercise's own name, keeps history and makes the latest measured current", async () => {
     h.viewer = coach;
     await createExercise(scratch.db, coach, { name: "safety bar squat", aliases: ["ssb"], equipment: "barbell" });
-    const add = (body: object) => maxes.POST(req("POST", "", body), params({ id: maya.id }));
+    const add = (body: object) => maxes.POST(request("POST", "", body), params({ id: maya.id }));
 
     const first = await add({ exercise: "Squat", value: 140, unit: "kg", date: daysAgo(10), source: "tested" });
     expect(first.status).toBe(201);
@@ -138,7 +123,7 @@ describe("athlete profile through the route handlers", () => {
     expect((await add({ exercise: "SSB", value: "120,5", unit: "kg", date: daysAgo(3), kind: "tm", note: "box" })).status).toBe(201);
 
     h.viewer = maya;
-    const view = await (await maxes.GET(req("GET", ""), params({ id: maya.id }))).json();
+    const view = await (await maxes.GET(request("GET", ""), params({ id: maya.id }))).json();
     expect(view.current.map((m: { exercise: string; value: number }) => [m.exercise, m.value])).toEqual([
       ["back squat", 140],
       ["safety bar squat", 120.5],
@@ -151,30 +136,30 @@ describe("athlete profile through the route handlers", () => {
     expect(squat.entries[0].createdBy).toBe("Rowan Hale");
 
     // Deleting the wrong entry brings the earlier one back as current; the rest of the history stays.
-    const del = await oneMax.DELETE(req("DELETE", ""), params({ id: maya.id, maxId: squat.entries[0].id }));
+    const del = await oneMax.DELETE(request("DELETE", ""), params({ id: maya.id, maxId: squat.entries[0].id }));
     expect(await del.json()).toEqual({ deleted: true, recomputed: 0 });
-    const after = await (await maxes.GET(req("GET", ""), params({ id: maya.id }))).json();
+    const after = await (await maxes.GET(request("GET", ""), params({ id: maya.id }))).json();
     expect(after.current.find((m: { exerciseKey: string }) => m.exerciseKey === "back-squat").value).toBe(130);
     expect(after.history.find((g: { exerciseKey: string }) => g.exerciseKey === "back-squat").entries).toHaveLength(1);
 
     h.viewer = coach;
-    expect((await oneMax.DELETE(req("DELETE", ""), params({ id: maya.id, maxId: squat.entries[0].id }))).status).toBe(404);
+    expect((await oneMax.DELETE(request("DELETE", ""), params({ id: maya.id, maxId: squat.entries[0].id }))).status).toBe(404);
     // Maya's max seen through Tomas's id: not his, so not found, and still there.
     const ssbId = after.current.find((m: { exerciseKey: string }) => m.exerciseKey === "safety bar squat").id;
-    expect((await oneMax.DELETE(req("DELETE", ""), params({ id: tomas.id, maxId: ssbId }))).status).toBe(404);
+    expect((await oneMax.DELETE(request("DELETE", ""), params({ id: tomas.id, maxId: ssbId }))).status).toBe(404);
     expect(await countMaxes(maya.id)).toBe(2);
   });
 
   it("refuses a bad max field by field, suggesting the nearest exercise names", async () => {
     h.viewer = coach;
-    const res = await maxes.POST(req("POST", "", { exercise: "bench pres", value: 0, unit: "st", date: addDays(todayUtc(), 5) }), params({ id: maya.id }));
+    const res = await maxes.POST(request("POST", "", { exercise: "bench pres", value: 0, unit: "st", date: addDays(todayUtc(), 5) }), params({ id: maya.id }));
     expect(res.status).toBe(422);
     const { error } = await res.json();
     expect(error.code).toBe("invalid_input");
     expect(error.fields.exercise).toMatch(/did you mean bench press/);
     expect(error.fields).toMatchObject({ value: "must be greater than 0", unit: "“st” is not one of kg or lb" });
     expect(error.fields.date).toMatch(/is in the future/);
-    const wrongType = await maxes.POST(req("POST", "", { exercise: "squat", value: [1], unit: "kg", date: "2026-01-01" }), params({ id: maya.id }));
+    const wrongType = await maxes.POST(request("POST", "", { exercise: "squat", value: [1], unit: "kg", date: "2026-01-01" }), params({ id: maya.id }));
     expect(wrongType.status).toBe(422);
     expect((await wrongType.json()).error.fields.value).toBe("value is a number");
   });
@@ -216,7 +201,7 @@ describe("athlete profile through the route handlers", () => {
     expect((await noMode.json()).error.fields.mode).toBe("mode is preview or apply");
     const xlsx = await csv.POST(csvFile("preview", "PK\u0003\u0004rest-of-a-zip"), params({ id: tomas.id }));
     expect((await xlsx.json()).error.message).toMatch(/spreadsheet file, not CSV/);
-    const json = await csv.POST(req("POST", "/api/athletes/x/maxes/csv?mode=preview", { a: 1 }), params({ id: tomas.id }));
+    const json = await csv.POST(request("POST", "/api/athletes/x/maxes/csv?mode=preview", { a: 1 }), params({ id: tomas.id }));
     expect(json.status).toBe(422);
   });
 
@@ -225,20 +210,16 @@ describe("athlete profile through the route handlers", () => {
     const athlete = { id: lena.id };
     // Lena is the other coach's athlete; that coach assigns and edits.
     h.viewer = otherCoach;
-    expect((await maxes.POST(req("POST", "", { exercise: "back squat", value: 100, unit: "kg", date: daysAgo(30) }), params({ id: athlete.id }))).status).toBe(201);
+    expect((await maxes.POST(request("POST", "", { exercise: "back squat", value: 100, unit: "kg", date: daysAgo(30) }), params({ id: athlete.id }))).status).toBe(201);
     const template = await createTemplate(scratch.db, otherCoach, { title: "Profile test", source: SOURCE });
     const start = daysAgo(14);
-    const assignment = await scratch.db
-      .insertInto("template_assignments")
-      .values({ template_id: template.id, version_id: template.version.id, athlete_id: lena.id, assigned_by: otherCoach.id, start_date: start, weekdays: [], ended_at: null })
-      .returning("id")
-      .executeTakeFirstOrThrow();
+    const assignmentId = await insertAssignment(scratch.db, { template, athleteId: lena.id, coachId: otherCoach.id, start });
     const plan = await planAssignment(scratch.db, { athleteId: lena.id, athleteName: lena.name, versionId: template.version.id, startDate: start, weekdays: [] });
     expect(plan.sessions.length).toBeGreaterThanOrEqual(2);
     // 75% of a 100 kg 1RM (percentage of one-repetition maximum, by definition).
     expect(firstWorkLoad(plan.sessions[0])).toBe(75);
     const row = (ordinal: number, date: string, logged: boolean) => ({
-      assignment_id: assignment.id,
+      assignment_id: assignmentId,
       athlete_id: lena.id,
       ordinal,
       planned_date: date,
@@ -250,15 +231,15 @@ describe("athlete profile through the route handlers", () => {
     });
     await scratch.db.insertInto("training_sessions").values([row(0, daysAgo(7), true), row(1, addDays(todayUtc(), 7), false)]).execute();
     const planOf = async (ordinal: number) =>
-      (await scratch.db.selectFrom("training_sessions").select("plan").where("assignment_id", "=", assignment.id).where("ordinal", "=", ordinal).executeTakeFirstOrThrow()).plan;
+      (await scratch.db.selectFrom("training_sessions").select("plan").where("assignment_id", "=", assignmentId).where("ordinal", "=", ordinal).executeTakeFirstOrThrow()).plan;
 
-    const added = await maxes.POST(req("POST", "", { exercise: "squat", value: 140, unit: "kg", date: daysAgo(1) }), params({ id: athlete.id }));
+    const added = await maxes.POST(request("POST", "", { exercise: "squat", value: 140, unit: "kg", date: daysAgo(1) }), params({ id: athlete.id }));
     expect((await added.json()).recomputed).toBe(1);
     // 75% × 140 kg = 105 kg, loadable with the kg club plates.
     expect(firstWorkLoad(await planOf(1))).toBe(105);
     expect(firstWorkLoad(await planOf(0))).toBe(75);
 
-    const lb = await equipment.PUT(req("PUT", "", { units: "lb", bodyweight: 180, bar: 45, plates: [45, 35, 25, 10, 5, 2.5], dumbbellStep: 5, machineStep: 10 }), params({ id: athlete.id }));
+    const lb = await equipment.PUT(request("PUT", "", { units: "lb", bodyweight: 180, bar: 45, plates: [45, 35, 25, 10, 5, 2.5], dumbbellStep: 5, machineStep: 10 }), params({ id: athlete.id }));
     expect((await lb.json()).recomputed).toBe(1);
     const future = await planOf(1);
     expect(future.units).toBe("lb");

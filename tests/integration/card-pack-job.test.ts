@@ -1,20 +1,20 @@
-import { mkdtempSync, readFileSync, rmSync } from "node:fs";
-import { createServer } from "node:net";
-import { tmpdir } from "node:os";
+import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { sql, type Kysely } from "kysely";
 import type PgBoss from "pg-boss";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { readStoredMessages, startSmtpFake } from "../../scripts/fakes/smtp.mjs";
+import { readStoredMessages } from "../../scripts/fakes/smtp.mjs";
 import type { Database } from "../../db/database";
-import { migrateToLatest } from "../../db/migrate";
-import { createUser } from "../../db/users";
-import { createScratchDb } from "../support/scratchDb";
+import { pause, startScratchBoss, stopBoss } from "../support/boss";
+import { freePort, type Mailbox, startMailbox } from "../support/mailbox";
+import { addPerson, migratedScratchDb, type Person } from "../support/people";
+import { params, post } from "../support/requests";
+import { addTestedMaxes, assignWithSessions } from "../support/training";
 
 // The handlers ask for the session, the pool and the queue themselves; all three are swapped here.
 const h = vi.hoisted(() => ({
   db: null as unknown as Kysely<Database>,
-  viewer: null as null | { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" },
+  viewer: null as null | Person,
   boss: null as unknown as PgBoss,
 }));
 vi.mock("@/server/auth", () => ({ getViewer: async () => h.viewer }));
@@ -27,45 +27,22 @@ vi.mock("@/server/jobs/boss", async (importOriginal) => ({
 
 const { createTemplate } = await import("../../db/templates");
 const { loadJobRun } = await import("../../db/jobs");
-const { planAssignment, sessionTitle } = await import("../../db/recompute");
-const { startBoss } = await import("../../server/jobs/boss");
 const { cardPackWorker, handleCardPack } = await import("../../server/jobs/cardPack");
 const { registerWorkers } = await import("../../server/jobs/worker");
 const weekCards = await import("../../app/api/athletes/[id]/cards/route");
 const jobRoute = await import("../../app/api/jobs/[id]/route");
 
-type Viewer = NonNullable<typeof h.viewer>;
 const SOURCE = "title: Pack job test\nunits: kg\nblock Base 2w\nday A mon\n  back squat 3x5 @75%\nday B thu\n  deadlift 2x5 @80%\n";
 const START = "2027-01-04";
 
-const post = (url: string, body: unknown) => new Request(`http://ironquill.test${url}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-const params = <T extends object>(p: T) => ({ params: Promise.resolve(p) });
-const pause = (ms: number) => new Promise((r) => setTimeout(r, ms));
-
-function scratchUrl(name: string): string {
-  const url = new URL(process.env.IQ_TEST_DB_ADMIN_URL!);
-  url.pathname = `/${name}`;
-  return url.toString();
-}
-
-/** A port nothing listens on: taken from the OS, then given back. */
-async function closedPort(): Promise<number> {
-  const server = createServer();
-  await new Promise<void>((r) => server.listen(0, "127.0.0.1", r));
-  const { port } = server.address() as { port: number };
-  await new Promise((r) => server.close(r));
-  return port;
-}
-
 describe("e-mailing a week's cards as a background job", () => {
-  let scratch: Awaited<ReturnType<typeof createScratchDb>>;
+  let scratch: Awaited<ReturnType<typeof migratedScratchDb>>;
   let db: Kysely<Database>;
-  let coach: Viewer;
-  let sky: Viewer;
-  let tomas: Viewer;
+  let coach: Person;
+  let sky: Person;
+  let tomas: Person;
   let dir: string;
-  let fake: Awaited<ReturnType<typeof startSmtpFake>>;
-  const env: Record<string, string | undefined> = {};
+  let mailbox: Mailbox;
 
   const queueEmail = async (body: Record<string, unknown> = { from: START }) => {
     h.viewer = coach;
@@ -75,65 +52,24 @@ describe("e-mailing a week's cards as a background job", () => {
   };
 
   beforeAll(async () => {
-    scratch = await createScratchDb();
+    scratch = await migratedScratchDb();
     db = scratch.db;
     h.db = db;
-    await migrateToLatest(db);
-    const user = async (email: string, name: string, role: Viewer["role"], coachId: string | null = null): Promise<Viewer> => {
-      const id = (await createUser(db, { email, name, passwordHash: "h", role, coachId }))!.id;
-      return { id, name, email, role };
-    };
-    coach = await user("rowan@p.test", "Rowan Hale", "coach");
-    sky = await user("sky@p.test", "Sky Other", "coach");
-    tomas = await user("tomas@p.test", "Tomas Brenner", "athlete", coach.id);
-    for (const [exercise, value] of [["back squat", 100], ["deadlift", 140]] as const) {
-      await db
-        .insertInto("athlete_maxes")
-        .values({ athlete_id: tomas.id, exercise, exercise_key: exercise, kind: "1rm", value, units: "kg", measured_on: "2026-12-01", source: "tested", note: null, created_by: coach.id })
-        .execute();
-    }
+    coach = await addPerson(db, "rowan@p.test", "Rowan Hale", "coach");
+    sky = await addPerson(db, "sky@p.test", "Sky Other", "coach");
+    tomas = await addPerson(db, "tomas@p.test", "Tomas Brenner", "athlete", coach.id);
+    await addTestedMaxes(db, coach.id, tomas.id, { "back squat": 100, deadlift: 140 }, "2026-12-01");
     const template = await createTemplate(db, coach, { title: "Pack job test", source: SOURCE });
-    const assignment = await db
-      .insertInto("template_assignments")
-      .values({ template_id: template.id, version_id: template.version.id, athlete_id: tomas.id, assigned_by: coach.id, start_date: START, weekdays: [], ended_at: null })
-      .returning("id")
-      .executeTakeFirstOrThrow();
-    const plan = await planAssignment(db, { athleteId: tomas.id, athleteName: tomas.name, versionId: template.version.id, startDate: START, weekdays: [] });
-    await db
-      .insertInto("training_sessions")
-      .values(
-        plan.sessions.map((s, ordinal) => ({
-          assignment_id: assignment.id,
-          athlete_id: tomas.id,
-          ordinal,
-          planned_date: s.date,
-          date: s.date,
-          title: sessionTitle(s),
-          plan: JSON.stringify(s),
-          logged_at: null,
-          completed_at: null,
-        })),
-      )
-      .execute();
+    await assignWithSessions(db, { template, athlete: tomas, coachId: coach.id, start: START });
 
-    dir = mkdtempSync(join(tmpdir(), "iq-card-pack-"));
-    fake = await startSmtpFake({ port: 0, dir });
-    const values = { SMTP_HOST: "127.0.0.1", SMTP_PORT: String(fake.port), SMTP_SECURE: "false", MAIL_FROM: "Ironquill <no-reply@ironquill.test>" };
-    for (const [k, v] of Object.entries(values)) {
-      env[k] = process.env[k];
-      process.env[k] = v;
-    }
+    mailbox = await startMailbox("iq-card-pack-");
+    dir = mailbox.dir;
     // A real queue on the scratch database; workers are registered only in the last test.
-    h.boss = await startBoss(scratchUrl(scratch.name));
+    h.boss = await startScratchBoss(scratch);
   });
   afterAll(async () => {
-    await h.boss?.stop({ graceful: false, wait: true });
-    await fake?.close();
-    for (const [k, v] of Object.entries(env)) {
-      if (v === undefined) delete process.env[k];
-      else process.env[k] = v;
-    }
-    if (dir) rmSync(dir, { recursive: true, force: true });
+    await stopBoss(h.boss);
+    await mailbox?.close();
     await scratch?.drop();
   });
 
@@ -212,7 +148,7 @@ describe("e-mailing a week's cards as a background job", () => {
     const run = cardPackWorker(db);
     const attempt = (retryCount: number) => run([{ data: { jobRunId: job.id }, retryCount, retryLimit: 3 } as unknown as PgBoss.JobWithMetadata<{ jobRunId: string }>]);
     const port = process.env.SMTP_PORT;
-    process.env.SMTP_PORT = String(await closedPort());
+    process.env.SMTP_PORT = String(await freePort());
     try {
       await expect(attempt(0)).rejects.toThrow("We couldn't send the e-mail just now");
       expect(await loadJobRun(db, job.id)).toMatchObject({ status: "running", error: null });

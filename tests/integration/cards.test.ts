@@ -1,22 +1,22 @@
-import { mkdtempSync, readFileSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
+import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import type { Kysely } from "kysely";
 import type PgBoss from "pg-boss";
 import { PDFParse } from "pdf-parse";
-import { readStoredMessages, startSmtpFake } from "../../scripts/fakes/smtp.mjs";
+import { readStoredMessages } from "../../scripts/fakes/smtp.mjs";
 import type { Database } from "../../db/database";
-import { migrateToLatest } from "../../db/migrate";
-import { planAssignment, sessionTitle } from "../../db/recompute";
 import { createTemplate } from "../../db/templates";
-import { createUser } from "../../db/users";
-import { createScratchDb } from "../support/scratchDb";
+import { startScratchBoss, stopBoss } from "../support/boss";
+import { type Mailbox, startMailbox } from "../support/mailbox";
+import { addPerson, migratedScratchDb, type Person } from "../support/people";
+import { get, idParams, post } from "../support/requests";
+import { addTestedMaxes, assignWithSessions } from "../support/training";
 
 // The handlers ask for the session, the pool and the queue themselves; all three are swapped here.
 const h = vi.hoisted(() => ({
   db: null as unknown as Kysely<Database>,
-  viewer: null as null | { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" },
+  viewer: null as null | Person,
   boss: null as unknown as PgBoss,
 }));
 vi.mock("@/server/auth", () => ({ getViewer: async () => h.viewer }));
@@ -29,7 +29,6 @@ vi.mock("@/server/jobs/boss", async (importOriginal) => ({
 
 const sessionCard = await import("../../app/api/sessions/[id]/card/route");
 const weekCards = await import("../../app/api/athletes/[id]/cards/route");
-const { startBoss } = await import("../../server/jobs/boss");
 const { handleCardPack } = await import("../../server/jobs/cardPack");
 
 const SOURCE = [
@@ -47,40 +46,10 @@ const SOURCE = [
 const START = "2027-01-04";
 const PUBLIC = "https://cards.example.test";
 
-type Person = { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" };
-
 async function seedAthlete(db: Kysely<Database>, coach: Person, athlete: Person) {
-  for (const [exercise, value] of [["back squat", 100], ["bench press", 80], ["deadlift", 140]] as const) {
-    await db
-      .insertInto("athlete_maxes")
-      .values({ athlete_id: athlete.id, exercise, exercise_key: exercise, kind: "1rm", value, units: "kg", measured_on: "2026-12-01", source: "tested", note: null, created_by: coach.id })
-      .execute();
-  }
+  await addTestedMaxes(db, coach.id, athlete.id, { "back squat": 100, "bench press": 80, deadlift: 140 }, "2026-12-01");
   const template = await createTemplate(db, coach, { title: "Card route test", source: SOURCE });
-  const assignment = await db
-    .insertInto("template_assignments")
-    .values({ template_id: template.id, version_id: template.version.id, athlete_id: athlete.id, assigned_by: coach.id, start_date: START, weekdays: [], ended_at: null })
-    .returning("id")
-    .executeTakeFirstOrThrow();
-  const plan = await planAssignment(db, { athleteId: athlete.id, athleteName: athlete.name, versionId: template.version.id, startDate: START, weekdays: [] });
-  const rows = await db
-    .insertInto("training_sessions")
-    .values(
-      plan.sessions.map((s, ordinal) => ({
-        assignment_id: assignment.id,
-        athlete_id: athlete.id,
-        ordinal,
-        planned_date: s.date,
-        date: s.date,
-        title: sessionTitle(s),
-        plan: JSON.stringify(s),
-        logged_at: null,
-        completed_at: null,
-      })),
-    )
-    .returning(["id", "date"])
-    .execute();
-  return rows.sort((a, b) => a.date.localeCompare(b.date));
+  return (await assignWithSessions(db, { template, athlete, coachId: coach.id, start: START })).rows;
 }
 
 async function readPdf(res: Response) {
@@ -94,18 +63,8 @@ async function readPdf(res: Response) {
   }
 }
 
-const get = (url: string) => new Request(`http://ironquill.test${url}`);
-const post = (url: string, body: unknown) => new Request(`http://ironquill.test${url}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-const params = (id: string) => ({ params: Promise.resolve({ id }) });
-
-function scratchUrl(name: string): string {
-  const url = new URL(process.env.IQ_TEST_DB_ADMIN_URL!);
-  url.pathname = `/${name}`;
-  return url.toString();
-}
-
 describe("session card downloads", () => {
-  let scratch: Awaited<ReturnType<typeof createScratchDb>>;
+  let scratch: Awaited<ReturnType<typeof migratedScratchDb>>;
   let coach: Person;
   let stranger: Person;
   let admin: Person;
@@ -116,18 +75,13 @@ describe("session card downloads", () => {
 
   beforeAll(async () => {
     process.env.NEXTAUTH_URL = PUBLIC;
-    scratch = await createScratchDb();
-    await migrateToLatest(scratch.db);
+    scratch = await migratedScratchDb();
     h.db = scratch.db;
-    const mk = async (email: string, name: string, role: Person["role"], coachId: string | null = null): Promise<Person> => {
-      const u = await createUser(scratch.db, { email, name, passwordHash: "h", role, coachId });
-      return { id: u!.id, name, email, role };
-    };
-    coach = await mk("rowan@c.test", "Rowan Hale", "coach");
-    stranger = await mk("sky@c.test", "Sky Other", "coach");
-    admin = await mk("pat@c.test", "Pat Ellery", "admin");
-    tomas = await mk("tomas@c.test", "Tomas Brenner", "athlete", coach.id);
-    maya = await mk("maya@c.test", "Maya Okonjo", "athlete", stranger.id);
+    coach = await addPerson(scratch.db, "rowan@c.test", "Rowan Hale", "coach");
+    stranger = await addPerson(scratch.db, "sky@c.test", "Sky Other", "coach");
+    admin = await addPerson(scratch.db, "pat@c.test", "Pat Ellery", "admin");
+    tomas = await addPerson(scratch.db, "tomas@c.test", "Tomas Brenner", "athlete", coach.id);
+    maya = await addPerson(scratch.db, "maya@c.test", "Maya Okonjo", "athlete", stranger.id);
     rows = await seedAthlete(scratch.db, coach, tomas);
   });
   afterAll(async () => {
@@ -138,7 +92,7 @@ describe("session card downloads", () => {
 
   it("gives the athlete their session's card as a named PDF with loads, plates and a code to the logging page", async () => {
     h.viewer = tomas;
-    const res = await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card`), params(rows[0].id));
+    const res = await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card`), idParams(rows[0].id));
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toBe("application/pdf");
     expect(res.headers.get("content-disposition")).toMatch(/^attachment; filename="tomas-brenner-2027-01-04-squat-day\.pdf"/);
@@ -154,7 +108,7 @@ describe("session card downloads", () => {
 
   it("gives the coach the same card in the size asked for", async () => {
     h.viewer = coach;
-    const res = await sessionCard.GET(get(`/api/sessions/${rows[1].id}/card?size=Letter`), params(rows[1].id));
+    const res = await sessionCard.GET(get(`/api/sessions/${rows[1].id}/card?size=Letter`), idParams(rows[1].id));
     expect(res.status).toBe(200);
     const { text, pages } = await readPdf(res);
     expect(text).toContain("Pull day · Thu 7 Jan 2027");
@@ -165,22 +119,22 @@ describe("session card downloads", () => {
   it("answers anyone else's card as not found, a wrong role 403 and no session 401", async () => {
     for (const viewer of [stranger, maya]) {
       h.viewer = viewer;
-      const res = await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card`), params(rows[0].id));
+      const res = await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card`), idParams(rows[0].id));
       expect(res.status).toBe(404);
       expect((await res.json()).error).toMatchObject({ code: "not_found", message: "That session does not exist or is not on your roster." });
     }
     h.viewer = coach;
-    const missing = await sessionCard.GET(get("/api/sessions/not-an-id/card"), params("not-an-id"));
+    const missing = await sessionCard.GET(get("/api/sessions/not-an-id/card"), idParams("not-an-id"));
     expect(missing.status).toBe(404);
     h.viewer = admin;
-    expect((await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card`), params(rows[0].id))).status).toBe(403);
+    expect((await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card`), idParams(rows[0].id))).status).toBe(403);
     h.viewer = null;
-    expect((await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card`), params(rows[0].id))).status).toBe(401);
+    expect((await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card`), idParams(rows[0].id))).status).toBe(401);
   });
 
   it("names a bad paper size with 422", async () => {
     h.viewer = tomas;
-    const res = await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card?size=a4`), params(rows[0].id));
+    const res = await sessionCard.GET(get(`/api/sessions/${rows[0].id}/card?size=a4`), idParams(rows[0].id));
     expect(res.status).toBe(422);
     expect((await res.json()).error.fields.size).toBe("size is a6, a5 or letter");
   });
@@ -188,7 +142,7 @@ describe("session card downloads", () => {
   it("packs the ISO week holding `from`, one card per session, and names the file by that week", async () => {
     h.viewer = coach;
     // Wednesday 6 Jan 2027 is in ISO week 2027-W01, which runs Mon 4 – Sun 10 Jan (ISO 8601).
-    const res = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-06`), params(tomas.id));
+    const res = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-06`), idParams(tomas.id));
     expect(res.status).toBe(200);
     expect(res.headers.get("content-disposition")).toMatch(/^attachment; filename="tomas-brenner-week-2027-W01\.pdf"/);
     const { text, pages } = await readPdf(res);
@@ -203,7 +157,7 @@ describe("session card downloads", () => {
   it("packs four weeks for the athlete themself, and prints a moved session on its new day", async () => {
     await scratch.db.updateTable("training_sessions").set({ date: "2027-01-15" }).where("id", "=", rows[3].id).execute();
     h.viewer = tomas;
-    const res = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-04&weeks=4&size=a5`), params(tomas.id));
+    const res = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-04&weeks=4&size=a5`), idParams(tomas.id));
     expect(res.status).toBe(200);
     expect(res.headers.get("content-disposition")).toMatch(/filename="tomas-brenner-4-weeks-from-2027-W01\.pdf"/);
     const { text } = await readPdf(res);
@@ -215,51 +169,40 @@ describe("session card downloads", () => {
   it("keeps the pack to the athlete and their coach, and says so when a week has nothing planned", async () => {
     for (const viewer of [stranger, maya]) {
       h.viewer = viewer;
-      const res = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-04`), params(tomas.id));
+      const res = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-04`), idParams(tomas.id));
       expect(res.status).toBe(404);
     }
     h.viewer = admin;
-    expect((await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-04`), params(tomas.id))).status).toBe(403);
+    expect((await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-04`), idParams(tomas.id))).status).toBe(403);
     h.viewer = coach;
-    const empty = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-03-01`), params(tomas.id));
+    const empty = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-03-01`), idParams(tomas.id));
     expect(empty.status).toBe(404);
     expect((await empty.json()).error.message).toBe("No sessions are planned for Tomas Brenner from 2027-03-01 to 2027-03-07.");
-    const noFrom = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards`), params(tomas.id));
+    const noFrom = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards`), idParams(tomas.id));
     expect(noFrom.status).toBe(422);
     expect(Object.keys((await noFrom.json()).error.fields)).toEqual(["from"]);
-    const twoWeeks = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-04&weeks=2`), params(tomas.id));
+    const twoWeeks = await weekCards.GET(get(`/api/athletes/${tomas.id}/cards?from=2027-01-04&weeks=2`), idParams(tomas.id));
     expect((await twoWeeks.json()).error.fields.weeks).toBe("weeks is 1 or 4");
   });
 
   describe("e-mailing the week's pack", () => {
     let dir: string;
-    let fake: Awaited<ReturnType<typeof startSmtpFake>>;
-    const env: Record<string, string | undefined> = {};
+    let mailbox: Mailbox;
 
     beforeAll(async () => {
-      dir = mkdtempSync(join(tmpdir(), "iq-cards-mail-"));
-      fake = await startSmtpFake({ port: 0, dir });
+      mailbox = await startMailbox("iq-cards-mail-");
+      dir = mailbox.dir;
       // A real queue with no worker: the POST only queues, and the tests run the job's handler themselves.
-      h.boss = await startBoss(scratchUrl(scratch.name));
-      const values = { SMTP_HOST: "127.0.0.1", SMTP_PORT: String(fake.port), SMTP_SECURE: "false", MAIL_FROM: "Ironquill <no-reply@ironquill.test>" };
-      for (const [k, v] of Object.entries(values)) {
-        env[k] = process.env[k];
-        process.env[k] = v;
-      }
+      h.boss = await startScratchBoss(scratch);
     });
     afterAll(async () => {
-      await h.boss?.stop({ graceful: false, wait: true });
-      await fake?.close();
-      for (const [k, v] of Object.entries(env)) {
-        if (v === undefined) delete process.env[k];
-        else process.env[k] = v;
-      }
-      rmSync(dir, { recursive: true, force: true });
+      await stopBoss(h.boss);
+      await mailbox?.close();
     });
 
     it("queues the e-mail when their coach asks, and its job sends the athlete the week's cards as a PDF attachment", async () => {
       h.viewer = coach;
-      const res = await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "2027-01-04" }), params(tomas.id));
+      const res = await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "2027-01-04" }), idParams(tomas.id));
       expect(res.status).toBe(202);
       const { job } = await res.json();
       expect(job).toMatchObject({ kind: "card-pack", status: "queued", total: 1, done: 0 });
@@ -283,13 +226,13 @@ describe("session card downloads", () => {
       const runs = async () => (await scratch.db.selectFrom("job_runs").select("id").execute()).length;
       const queuedBefore = await runs();
       h.viewer = tomas;
-      expect((await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "2027-01-04" }), params(tomas.id))).status).toBe(403);
+      expect((await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "2027-01-04" }), idParams(tomas.id))).status).toBe(403);
       h.viewer = stranger;
-      expect((await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "2027-01-04" }), params(tomas.id))).status).toBe(404);
+      expect((await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "2027-01-04" }), idParams(tomas.id))).status).toBe(404);
       h.viewer = coach;
-      const bad = await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "4 Jan" }), params(tomas.id));
+      const bad = await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "4 Jan" }), idParams(tomas.id));
       expect(bad.status).toBe(422);
-      const empty = await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "2027-03-03" }), params(tomas.id));
+      const empty = await weekCards.POST(post(`/api/athletes/${tomas.id}/cards`, { from: "2027-03-03" }), idParams(tomas.id));
       expect(empty.status).toBe(404);
       // Wednesday 3 Mar 2027 is in the ISO week Mon 1 – Sun 7 Mar (ISO 8601).
       expect((await empty.json()).error).toMatchObject({

@@ -1,19 +1,19 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import type { Kysely } from "kysely";
 import type { Database } from "../../db/database";
-import { migrateToLatest } from "../../db/migrate";
-import { createUser } from "../../db/users";
-import { createScratchDb } from "../support/scratchDb";
+import { addPerson, migratedScratchDb, type Person } from "../support/people";
+import { params, request } from "../support/requests";
+import { addTestedMaxes, assignWithSessions } from "../support/training";
 
 const h = vi.hoisted(() => ({
   db: null as unknown as Kysely<Database>,
-  viewer: null as null | { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" },
+  viewer: null as null | Person,
 }));
 vi.mock("@/server/auth", () => ({ getViewer: async () => h.viewer }));
 vi.mock("@/db/client", async (importOriginal) => ({ ...(await importOriginal<object>()), getDb: () => h.db }));
 
 const { createTemplate } = await import("../../db/templates");
-const { planAssignment, sessionTitle, todayUtc } = await import("../../db/recompute");
+const { todayUtc } = await import("../../db/recompute");
 const { saveSet, finishSession } = await import("../../db/logs");
 const { coachDashboard } = await import("../../db/dashboard");
 const { athleteProgress } = await import("../../db/progress");
@@ -36,56 +36,32 @@ day B thu
   bench press 3x5 @75%
 `;
 
-type Viewer = NonNullable<typeof h.viewer>;
-const params = <T extends object>(p: T) => ({ params: Promise.resolve(p) });
-const req = (method: string, body?: unknown) =>
-  new Request("http://ironquill.test/x", { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
+const req = (method: string, body?: unknown) => request(method, "/x", body);
 
 // The fixture sits around the real current week so that "future" means what recompute thinks it means.
 const MONDAY = isoMonday(todayUtc());
 const START = addDays(MONDAY, -14);
 
-async function assign(db: Kysely<Database>, coach: Viewer, athlete: Viewer, autoRegulate: boolean, maxes: Record<string, number>, source = SOURCE) {
-  const t = await createTemplate(db, coach, { title: `T ${athlete.name}`, source });
-  for (const [exercise, value] of Object.entries(maxes)) {
-    await db
-      .insertInto("athlete_maxes")
-      .values({ athlete_id: athlete.id, exercise, exercise_key: exercise.replace(/ /g, "-"), kind: "1rm", value, units: "kg", measured_on: addDays(START, -30), source: "tested", note: null, created_by: coach.id })
-      .execute();
-  }
-  const plan = await planAssignment(db, { athleteId: athlete.id, athleteName: athlete.name, versionId: t.version.id, startDate: START, weekdays: [] });
-  const a = await db
-    .insertInto("template_assignments")
-    .values({ template_id: t.id, version_id: t.version.id, athlete_id: athlete.id, assigned_by: coach.id, start_date: START, weekdays: [], auto_regulate: autoRegulate, ended_at: null })
-    .returning("id")
-    .executeTakeFirstOrThrow();
-  return db
-    .insertInto("training_sessions")
-    .values(plan.sessions.map((s, i) => ({ assignment_id: a.id, athlete_id: athlete.id, ordinal: i, planned_date: s.date, date: s.date, title: sessionTitle(s), plan: JSON.stringify(s), logged_at: null, completed_at: null })))
-    .returning(["id", "date", "plan"])
-    .execute()
-    .then((rows) => rows.sort((x, y) => x.date.localeCompare(y.date)));
+async function assign(db: Kysely<Database>, coach: Person, athlete: Person, autoRegulate: boolean, maxes: Record<string, number>, source = SOURCE) {
+  const template = await createTemplate(db, coach, { title: `T ${athlete.name}`, source });
+  await addTestedMaxes(db, coach.id, athlete.id, maxes, addDays(START, -30), (exercise) => exercise.replace(/ /g, "-"));
+  return (await assignWithSessions(db, { template, athlete, coachId: coach.id, start: START, autoRegulate })).rows;
 }
 
 describe("coach dashboard and max proposals", () => {
-  let scratch: Awaited<ReturnType<typeof createScratchDb>>;
-  let coach: Viewer, otherCoach: Viewer, tomas: Viewer, maya: Viewer, lena: Viewer, ivo: Viewer;
+  let scratch: Awaited<ReturnType<typeof migratedScratchDb>>;
+  let coach: Person, otherCoach: Person, tomas: Person, maya: Person, lena: Person, ivo: Person;
   let tomasSessions: Awaited<ReturnType<typeof assign>>;
 
   beforeAll(async () => {
-    scratch = await createScratchDb();
-    await migrateToLatest(scratch.db);
+    scratch = await migratedScratchDb();
     h.db = scratch.db;
-    const user = async (email: string, name: string, role: Viewer["role"], coachId: string | null = null) => {
-      const u = await createUser(scratch.db, { email, name, passwordHash: "h", role, coachId });
-      return { id: u!.id, name, email, role };
-    };
-    coach = await user("coach@d.test", "Rowan", "coach");
-    otherCoach = await user("sky@d.test", "Sky", "coach");
-    tomas = await user("tomas@d.test", "Tomas", "athlete", coach.id);
-    maya = await user("maya@d.test", "Maya", "athlete", coach.id);
-    lena = await user("lena@d.test", "Lena", "athlete", coach.id);
-    ivo = await user("ivo@d.test", "Ivo", "athlete", otherCoach.id);
+    coach = await addPerson(scratch.db, "coach@d.test", "Rowan", "coach");
+    otherCoach = await addPerson(scratch.db, "sky@d.test", "Sky", "coach");
+    tomas = await addPerson(scratch.db, "tomas@d.test", "Tomas", "athlete", coach.id);
+    maya = await addPerson(scratch.db, "maya@d.test", "Maya", "athlete", coach.id);
+    lena = await addPerson(scratch.db, "lena@d.test", "Lena", "athlete", coach.id);
+    ivo = await addPerson(scratch.db, "ivo@d.test", "Ivo", "athlete", otherCoach.id);
     tomasSessions = await assign(scratch.db, coach, tomas, false, { "back squat": 140, "bench press": 100 });
   });
   afterAll(async () => {
@@ -191,8 +167,7 @@ describe("coach dashboard and max proposals", () => {
   });
 
   it("leaves deload weeks out of the evidence for a proposal", async () => {
-    const hana = await createUser(scratch.db, { email: "hana@d.test", name: "Hana", passwordHash: "h", role: "athlete", coachId: coach.id });
-    const athlete = { id: hana!.id, name: "Hana", email: "hana@d.test", role: "athlete" as const };
+    const athlete = await addPerson(scratch.db, "hana@d.test", "Hana", "athlete", coach.id);
     const sessions = await assign(scratch.db, coach, athlete, true, { "back squat": 100 }, SOURCE.replace("block Base 4w", "block Base 4w deload w2"));
     const squatDays = sessions.filter((s) => s.plan.exercises[0].name === "back squat");
     expect(squatDays.map((s) => s.plan.deload)).toEqual([false, true, false, false]);

@@ -1,20 +1,21 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import type { Kysely } from "kysely";
 import ICAL from "ical.js";
+import { sessionRows } from "../../db/assignments";
 import type { Database } from "../../db/database";
-import { migrateToLatest } from "../../db/migrate";
 import { FEED_PAST_DAYS } from "../../db/calendarFeeds";
-import { planAssignment, sessionTitle, todayUtc } from "../../db/recompute";
+import { todayUtc } from "../../db/recompute";
 import { createTemplate } from "../../db/templates";
-import { createUser } from "../../db/users";
 import { addDays, nextOnOrAfter } from "../../lib/dates";
 import { CAUTION_TEXT } from "../../components/Caution";
-import { createScratchDb } from "../support/scratchDb";
+import { addPerson, migratedScratchDb, type Person } from "../support/people";
+import { params, request } from "../support/requests";
+import { addTestedMaxes, assignWithSessions } from "../support/training";
 
 // The handlers ask for the session and the pool themselves; both are swapped here.
 const h = vi.hoisted(() => ({
   db: null as unknown as Kysely<Database>,
-  viewer: null as null | { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" },
+  viewer: null as null | Person,
 }));
 vi.mock("@/server/auth", () => ({ getViewer: async () => h.viewer }));
 vi.mock("@/db/client", async (importOriginal) => ({ ...(await importOriginal<object>()), getDb: () => h.db }));
@@ -23,12 +24,6 @@ const feedRoute = await import("../../app/api/calendar/feed/route");
 const icsRoute = await import("../../app/api/calendar/[token]/route");
 
 const SOURCE = "title: Feed test\nunits: kg\nblock Base 2w\nday Squat day mon\n  back squat 3x5 @75% \"sit between the heels\"\nday Pull day thu\n  deadlift 2x5 @80%\n";
-const URL_BASE = "http://ironquill.test";
-
-type Person = { id: string; name: string; email: string; role: "coach" | "athlete" };
-const request = (method: string, url: string, body?: unknown) =>
-  new Request(URL_BASE + url, { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
-const params = <T extends object>(p: T) => ({ params: Promise.resolve(p) });
 
 /** GETs a feed path ("/api/calendar/<token>.ics") through the route handler. */
 async function fetchFeed(path: string): Promise<Response> {
@@ -37,7 +32,7 @@ async function fetchFeed(path: string): Promise<Response> {
 }
 
 describe("iCalendar feed", () => {
-  let scratch: Awaited<ReturnType<typeof createScratchDb>>;
+  let scratch: Awaited<ReturnType<typeof migratedScratchDb>>;
   let coach: Person;
   let stranger: Person;
   let athlete: Person;
@@ -45,47 +40,23 @@ describe("iCalendar feed", () => {
   let oldSessionId: string;
 
   beforeAll(async () => {
-    scratch = await createScratchDb();
-    await migrateToLatest(scratch.db);
+    scratch = await migratedScratchDb();
     h.db = scratch.db;
-    const mk = async (email: string, name: string, role: Person["role"], coachId: string | null = null): Promise<Person> => {
-      const u = await createUser(scratch.db, { email, name, passwordHash: "h", role, coachId });
-      return { id: u!.id, name, email, role };
-    };
-    coach = await mk("coach@f.test", "Rowan", "coach");
-    stranger = await mk("other@f.test", "Sky", "coach");
-    athlete = await mk("lena@f.test", "Lena", "athlete", coach.id);
-    for (const [exercise, value] of [["back squat", 100], ["deadlift", 140]] as const) {
-      await scratch.db
-        .insertInto("athlete_maxes")
-        .values({ athlete_id: athlete.id, exercise, exercise_key: exercise, kind: "1rm", value, units: "kg", measured_on: "2026-01-01", source: "tested", note: null, created_by: coach.id })
-        .execute();
-    }
+    coach = await addPerson(scratch.db, "coach@f.test", "Rowan", "coach");
+    stranger = await addPerson(scratch.db, "other@f.test", "Sky", "coach");
+    athlete = await addPerson(scratch.db, "lena@f.test", "Lena", "athlete", coach.id);
+    await addTestedMaxes(scratch.db, coach.id, athlete.id, { "back squat": 100, deadlift: 140 }, "2026-01-01");
     const template = await createTemplate(scratch.db, coach, { title: "Feed test", source: SOURCE });
     // Dated from the next Monday so the sessions are ahead of the feed's cut-off whenever this runs.
     const start = nextOnOrAfter(todayUtc(), "mon");
-    const assignment = await scratch.db
-      .insertInto("template_assignments")
-      .values({ template_id: template.id, version_id: template.version.id, athlete_id: athlete.id, assigned_by: coach.id, start_date: start, weekdays: [], ended_at: null })
-      .returning("id")
-      .executeTakeFirstOrThrow();
-    const plan = await planAssignment(scratch.db, { athleteId: athlete.id, athleteName: athlete.name, versionId: template.version.id, startDate: start, weekdays: [] });
-    const rows = plan.sessions.map((s, ordinal) => ({
-      assignment_id: assignment.id,
-      athlete_id: athlete.id,
-      ordinal,
-      planned_date: s.date,
-      date: s.date,
-      title: sessionTitle(s),
-      plan: JSON.stringify(s),
-      logged_at: null,
-      completed_at: null,
-    }));
-    sessions = await scratch.db.insertInto("training_sessions").values(rows).returning(["id", "date", "title"]).execute();
+    const assigned = await assignWithSessions(scratch.db, { template, athlete, coachId: coach.id, start });
+    sessions = assigned.rows;
     // One session long past: older than the feed reaches back, so it must not appear.
+    const longAgo = addDays(todayUtc(), -FEED_PAST_DAYS - 30);
+    const [first] = sessionRows(assigned.assignmentId, athlete.id, [{ ordinal: 99, session: assigned.plan.sessions[0] }]);
     const old = await scratch.db
       .insertInto("training_sessions")
-      .values({ ...rows[0], ordinal: 99, date: addDays(todayUtc(), -FEED_PAST_DAYS - 30), planned_date: addDays(todayUtc(), -FEED_PAST_DAYS - 30) })
+      .values({ ...first, date: longAgo, planned_date: longAgo })
       .returning("id")
       .executeTakeFirstOrThrow();
     oldSessionId = old.id;

@@ -1,19 +1,15 @@
 import { createHash } from "node:crypto";
-import { mkdtempSync, rmSync } from "node:fs";
-import { createServer } from "node:net";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
 import bcrypt from "bcryptjs";
 import type { Kysely } from "kysely";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { readStoredMessages, startSmtpFake } from "../../scripts/fakes/smtp.mjs";
+import { readStoredMessages } from "../../scripts/fakes/smtp.mjs";
 import type { Database } from "../../db/database";
-import { migrateToLatest } from "../../db/migrate";
 import { createUser } from "../../db/users";
-import { createScratchDb } from "../support/scratchDb";
+import { freePort, type Mailbox, startMailbox } from "../support/mailbox";
+import { addPerson, migratedScratchDb, type Person } from "../support/people";
+import { form, idParams, request } from "../support/requests";
 
-type Viewer = { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" };
-const h = vi.hoisted(() => ({ db: null as unknown as Kysely<Database>, viewer: null as null | Viewer }));
+const h = vi.hoisted(() => ({ db: null as unknown as Kysely<Database>, viewer: null as null | Person }));
 vi.mock("@/server/auth", () => ({
   getViewer: async () => h.viewer,
   // Fewer rounds than the app's 10 keep the test quick; the hash is still real bcrypt.
@@ -30,49 +26,19 @@ const { acceptInvitationAction } = await import("../../app/(auth)/invite/[token]
 const BASE = "http://ironquill.test:3999";
 const PASSWORD = "chalk-and-iron-42";
 
-function req(method: string, url: string, body?: unknown): Request {
-  return new Request(BASE + url, { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : typeof body === "string" ? body : JSON.stringify(body) });
-}
-function freePort(): Promise<number> {
-  return new Promise((ok) => {
-    const s = createServer().listen(0, "127.0.0.1", () => {
-      const port = (s.address() as { port: number }).port;
-      s.close(() => ok(port));
-    });
-  });
-}
-const ctx = (id: string) => ({ params: Promise.resolve({ id }) });
-
-/** Sets environment variables; the returned function puts the earlier values back. */
-function setEnv(values: Record<string, string>): () => void {
-  const before = Object.fromEntries(Object.keys(values).map((k) => [k, process.env[k]]));
-  Object.assign(process.env, values);
-  return () => {
-    for (const [k, v] of Object.entries(before)) {
-      if (v === undefined) delete process.env[k];
-      else process.env[k] = v;
-    }
-  };
-}
-
-function form(fields: Record<string, string>): FormData {
-  const f = new FormData();
-  for (const [k, v] of Object.entries(fields)) f.append(k, v);
-  return f;
-}
+const req = (method: string, url: string, body?: unknown) => request(method, url, body, BASE);
 const blank = { ok: false, message: null, fields: {}, values: { name: "" }, email: null, closed: null };
 const acceptNew = (token: string, over: Record<string, string> = {}) =>
   acceptInvitationAction(blank, form({ token, mode: "new", name: "Ada Stone", password: PASSWORD, confirm: PASSWORD, ...over }));
 const acceptExisting = (token: string, password: string) => acceptInvitationAction(blank, form({ token, mode: "existing", password }));
 
 describe("invitations", () => {
-  let scratch: Awaited<ReturnType<typeof createScratchDb>>;
-  let fake: Awaited<ReturnType<typeof startSmtpFake>>;
+  let scratch: Awaited<ReturnType<typeof migratedScratchDb>>;
+  let mailbox: Mailbox;
   let dir: string;
-  let coach: Viewer;
-  let other: Viewer;
+  let coach: Person;
+  let other: Person;
   let veteran: { id: string; email: string };
-  let restoreEnv = () => {};
 
   /** The token in the newest e-mail to `to`, read from the link in its text. */
   function tokenMailedTo(to: string): { token: string; text: string; subject: string; count: number } {
@@ -84,31 +50,25 @@ describe("invitations", () => {
     return { token: match[2], text: last.text, subject: last.subject, count: mails.length };
   }
 
-  async function invite(email: string, name?: string, as: Viewer = coach) {
+  async function invite(email: string, name?: string, as: Person = coach) {
     h.viewer = as;
     const res = await list.POST(req("POST", "/api/invitations", { email, name }));
     return { status: res.status, body: await res.json() };
   }
 
   beforeAll(async () => {
-    dir = mkdtempSync(join(tmpdir(), "iq-invite-mail-"));
-    fake = await startSmtpFake({ port: 0, dir });
-    restoreEnv = setEnv({ SMTP_HOST: "127.0.0.1", SMTP_PORT: String(fake.port), SMTP_SECURE: "false", SMTP_USER: "", MAIL_FROM: "Ironquill <no-reply@ironquill.test>", NEXTAUTH_URL: BASE });
-    scratch = await createScratchDb();
-    await migrateToLatest(scratch.db);
+    mailbox = await startMailbox("iq-invite-mail-", { SMTP_USER: "", NEXTAUTH_URL: BASE });
+    dir = mailbox.dir;
+    scratch = await migratedScratchDb();
     h.db = scratch.db;
-    const a = await createUser(scratch.db, { email: "rowan@larchmere.test", name: "Rowan Hale", passwordHash: "x", role: "coach" });
-    const b = await createUser(scratch.db, { email: "sky@other.test", name: "Sky Marr", passwordHash: "x", role: "coach" });
+    coach = await addPerson(scratch.db, "rowan@larchmere.test", "Rowan Hale", "coach");
+    other = await addPerson(scratch.db, "sky@other.test", "Sky Marr", "coach");
     const v = await createUser(scratch.db, { email: "Lena@Larchmere.test", name: "Lena Fisk", passwordHash: await bcrypt.hash(PASSWORD, 4), role: "athlete" });
-    coach = { id: a!.id, name: "Rowan Hale", email: "rowan@larchmere.test", role: "coach" };
-    other = { id: b!.id, name: "Sky Marr", email: "sky@other.test", role: "coach" };
     veteran = { id: v!.id, email: "Lena@Larchmere.test" };
   });
   afterAll(async () => {
-    await fake?.close();
+    await mailbox?.close();
     await scratch?.drop();
-    restoreEnv();
-    rmSync(dir, { recursive: true, force: true });
   });
 
   it("hashes tokens with SHA-256", () => {
@@ -183,8 +143,8 @@ describe("invitations", () => {
     const listed = await (await list.GET()).json();
     expect(listed.invitations.find((i: { email: string }) => i.email === "ada@larchmere.test").state).toBe("accepted");
     // Accepted: nothing left to resend or revoke.
-    expect((await resend.POST(req("POST", "/x"), ctx(created.body.invitation.id))).status).toBe(409);
-    expect((await one.DELETE(req("DELETE", "/x"), ctx(created.body.invitation.id))).status).toBe(409);
+    expect((await resend.POST(req("POST", "/x"), idParams(created.body.invitation.id))).status).toBe(409);
+    expect((await one.DELETE(req("DELETE", "/x"), idParams(created.body.invitation.id))).status).toBe(409);
     // And inviting them again is refused: they are on the roster.
     const dup = await invite("ADA@larchmere.test");
     expect(dup.status).toBe(409);
@@ -214,7 +174,7 @@ describe("invitations", () => {
     h.viewer = coach;
     expect((await (await list.GET()).json()).invitations.find((i: { email: string }) => i.email === "late@larchmere.test").state).toBe("expired");
 
-    const res = await resend.POST(req("POST", "/x"), ctx(created.body.invitation.id));
+    const res = await resend.POST(req("POST", "/x"), idParams(created.body.invitation.id));
     expect(res.status).toBe(200);
     const body = await res.json();
     expect(body.invitation.state).toBe("pending");
@@ -234,7 +194,7 @@ describe("invitations", () => {
     const created = await invite("resend@larchmere.test");
     const first = tokenMailedTo("resend@larchmere.test");
     h.viewer = coach;
-    expect((await resend.POST(req("POST", "/x"), ctx(created.body.invitation.id))).status).toBe(200);
+    expect((await resend.POST(req("POST", "/x"), idParams(created.body.invitation.id))).status).toBe(200);
     const second = tokenMailedTo("resend@larchmere.test");
     expect(await acceptNew(first.token)).toMatchObject({ ok: false, closed: "unknown" });
     expect((await inv.findInvitationByToken(scratch.db, second.token)).status).toBe("pending");
@@ -244,14 +204,14 @@ describe("invitations", () => {
     const created = await invite("gone@larchmere.test");
     const { token } = tokenMailedTo("gone@larchmere.test");
     h.viewer = coach;
-    const res = await one.DELETE(req("DELETE", "/x"), ctx(created.body.invitation.id));
+    const res = await one.DELETE(req("DELETE", "/x"), idParams(created.body.invitation.id));
     expect(res.status).toBe(200);
     expect((await res.json()).invitation.state).toBe("revoked");
     expect(await inv.findInvitationByToken(scratch.db, token)).toEqual({ status: "revoked", coachName: "Rowan Hale" });
     expect(await acceptNew(token)).toMatchObject({ ok: false, closed: "revoked" });
-    expect((await resend.POST(req("POST", "/x"), ctx(created.body.invitation.id))).status).toBe(409);
+    expect((await resend.POST(req("POST", "/x"), idParams(created.body.invitation.id))).status).toBe(409);
     // Revoking twice is harmless.
-    expect((await one.DELETE(req("DELETE", "/x"), ctx(created.body.invitation.id))).status).toBe(200);
+    expect((await one.DELETE(req("DELETE", "/x"), idParams(created.body.invitation.id))).status).toBe(200);
     // A revoked invitation does not block a new one to the same address.
     expect((await invite("gone@larchmere.test")).status).toBe(201);
   });
@@ -267,15 +227,15 @@ describe("invitations", () => {
   it("does not let another coach see, resend or revoke an invitation", async () => {
     const created = await invite("mine@larchmere.test");
     h.viewer = other;
-    const r1 = await resend.POST(req("POST", "/x"), ctx(created.body.invitation.id));
+    const r1 = await resend.POST(req("POST", "/x"), idParams(created.body.invitation.id));
     expect(r1.status).toBe(404);
     expect((await r1.json()).error.code).toBe("not_found");
-    const r2 = await one.DELETE(req("DELETE", "/x"), ctx(created.body.invitation.id));
+    const r2 = await one.DELETE(req("DELETE", "/x"), idParams(created.body.invitation.id));
     expect(r2.status).toBe(404);
     expect((await r2.json()).error.code).toBe("not_found");
     expect((await (await list.GET()).json()).invitations).toEqual([]);
     // Not an id at all: also simply not found.
-    expect((await one.DELETE(req("DELETE", "/x"), ctx("../../etc"))).status).toBe(404);
+    expect((await one.DELETE(req("DELETE", "/x"), idParams("../../etc"))).status).toBe(404);
     expect((await inv.findInvitationByToken(scratch.db, tokenMailedTo("mine@larchmere.test").token)).status).toBe("pending");
   });
 
@@ -324,7 +284,7 @@ describe("invitations", () => {
       expect(status).toBe(503);
       expect(body.error.code).toBe("unavailable");
     } finally {
-      process.env.SMTP_PORT = String(fake.port);
+      process.env.SMTP_PORT = String(mailbox.port);
     }
     const rows = await scratch.db.selectFrom("invitations").select("id").where("email", "=", "unsent@larchmere.test").execute();
     expect(rows).toEqual([]);

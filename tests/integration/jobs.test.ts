@@ -2,14 +2,15 @@ import { sql, type Kysely } from "kysely";
 import type PgBoss from "pg-boss";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import type { Database } from "../../db/database";
-import { migrateToLatest } from "../../db/migrate";
 import { createUser } from "../../db/users";
-import { createScratchDb } from "../support/scratchDb";
+import { pause, startScratchBoss, stopBoss } from "../support/boss";
+import { addPerson, migratedScratchDb, type Person } from "../support/people";
+import { params, post } from "../support/requests";
 
 // The handlers ask for the session, the pool and the queue themselves; all three are swapped here.
 const h = vi.hoisted(() => ({
   db: null as unknown as Kysely<Database>,
-  viewer: null as null | { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" },
+  viewer: null as null | Person,
   boss: null as unknown as PgBoss,
 }));
 vi.mock("@/server/auth", () => ({ getViewer: async () => h.viewer }));
@@ -23,29 +24,17 @@ vi.mock("@/server/jobs/boss", async (importOriginal) => ({
 const { createTemplate } = await import("../../db/templates");
 const { createJobRun, loadJobRun } = await import("../../db/jobs");
 const { handleBulkAssign } = await import("../../server/jobs/bulkAssign");
-const { startBoss } = await import("../../server/jobs/boss");
 const { registerWorkers } = await import("../../server/jobs/worker");
 const assignments = await import("../../app/api/assignments/route");
 const jobRoute = await import("../../app/api/jobs/[id]/route");
 
-type Viewer = NonNullable<typeof h.viewer>;
 const SOURCE = "title: Bulk test\nblock Base 2w\nday A\n  back squat 3x5 @75%\nday B\n  deadlift 3x5 @75%\n";
 
-const post = (url: string, body: unknown) => new Request(`http://ironquill.test${url}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-const params = <T extends object>(p: T) => ({ params: Promise.resolve(p) });
-const pause = (ms: number) => new Promise((r) => setTimeout(r, ms));
-
-function scratchUrl(name: string): string {
-  const url = new URL(process.env.IQ_TEST_DB_ADMIN_URL!);
-  url.pathname = `/${name}`;
-  return url.toString();
-}
-
 describe("bulk assignment as a background job", () => {
-  let scratch: Awaited<ReturnType<typeof createScratchDb>>;
+  let scratch: Awaited<ReturnType<typeof migratedScratchDb>>;
   let db: Kysely<Database>;
-  let coach: Viewer;
-  let sky: Viewer;
+  let coach: Person;
+  let sky: Person;
   let athletes: string[];
   let versionId: string;
 
@@ -53,20 +42,17 @@ describe("bulk assignment as a background job", () => {
     Number((await db.selectFrom("template_assignments").select((eb) => eb.fn.countAll<string>().as("n")).where("athlete_id", "=", athleteId).executeTakeFirstOrThrow()).n);
 
   beforeAll(async () => {
-    scratch = await createScratchDb();
+    scratch = await migratedScratchDb();
     db = scratch.db;
     h.db = db;
-    await migrateToLatest(db);
-    const user = async (email: string, role: Viewer["role"], coachId: string | null = null) =>
-      (await createUser(db, { email, name: email.split("@")[0], passwordHash: "h", role, coachId }))!.id;
-    coach = { id: await user("rowan@j.test", "coach"), name: "rowan", email: "rowan@j.test", role: "coach" };
-    sky = { id: await user("sky@j.test", "coach"), name: "sky", email: "sky@j.test", role: "coach" };
+    coach = await addPerson(db, "rowan@j.test", "rowan", "coach");
+    sky = await addPerson(db, "sky@j.test", "sky", "coach");
     athletes = [];
-    for (const n of ["a1", "a2", "a3", "a4", "a5"]) athletes.push(await user(`${n}@j.test`, "athlete", coach.id));
+    for (const n of ["a1", "a2", "a3", "a4", "a5"]) athletes.push((await addPerson(db, `${n}@j.test`, n, "athlete", coach.id)).id);
     versionId = (await createTemplate(db, coach, { title: "Bulk test", source: SOURCE })).version.id;
   });
   afterAll(async () => {
-    await h.boss?.stop({ graceful: false, wait: true });
+    await stopBoss(h.boss);
     await scratch?.drop();
   });
 
@@ -105,7 +91,7 @@ describe("bulk assignment as a background job", () => {
   });
 
   it("queues several athletes through the route and a real pg-boss worker, reporting progress to the requester only", async () => {
-    h.boss = await startBoss(scratchUrl(scratch.name));
+    h.boss = await startScratchBoss(scratch);
     await registerWorkers(h.boss, db, { pollingIntervalSeconds: 0.5 });
     const [, , , a4, a5] = athletes;
     h.viewer = coach;

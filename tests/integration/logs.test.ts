@@ -1,20 +1,20 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import type { Kysely } from "kysely";
 import type { Database } from "../../db/database";
-import { migrateToLatest } from "../../db/migrate";
-import { createUser } from "../../db/users";
-import { createScratchDb } from "../support/scratchDb";
+import { addPerson, migratedScratchDb, type Person } from "../support/people";
+import { params, request } from "../support/requests";
+import { addTestedMaxes, assignWithSessions } from "../support/training";
 
 // The handlers ask for the session and the pool themselves; both are swapped here.
 const h = vi.hoisted(() => ({
   db: null as unknown as Kysely<Database>,
-  viewer: null as null | { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" },
+  viewer: null as null | Person,
 }));
 vi.mock("@/server/auth", () => ({ getViewer: async () => h.viewer }));
 vi.mock("@/db/client", async (importOriginal) => ({ ...(await importOriginal<object>()), getDb: () => h.db }));
 
 const { createTemplate } = await import("../../db/templates");
-const { planAssignment, sessionTitle, todayUtc } = await import("../../db/recompute");
+const { todayUtc } = await import("../../db/recompute");
 const { sessionSummary } = await import("../../db/progress");
 const { addDays } = await import("../../lib/dates/date");
 const { isoMonday } = await import("../../lib/progress/attention");
@@ -35,55 +35,28 @@ day B thu
   bench press 3x5 @80%
 `;
 
-type Viewer = NonNullable<typeof h.viewer>;
-const URL_BASE = "http://ironquill.test";
-const params = <T extends object>(p: T) => ({ params: Promise.resolve(p) });
-function req(method: string, url: string, body?: unknown): Request {
-  return new Request(URL_BASE + url, { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
-}
-
 /** A coach's template assigned to an athlete from two weeks back, with the sessions stored as assignment would. */
-async function assign(db: Kysely<Database>, coach: Viewer, athlete: Viewer, model: string, maxes: Record<string, number>) {
-  const t = await createTemplate(db, coach, { title: `T ${athlete.name}`, source: SOURCE(model) });
-  for (const [exercise, value] of Object.entries(maxes)) {
-    await db
-      .insertInto("athlete_maxes")
-      .values({ athlete_id: athlete.id, exercise, exercise_key: exercise.replace(/ /g, "-"), kind: "1rm", value, units: "kg", measured_on: addDays(todayUtc(), -60), source: "tested", note: null, created_by: coach.id })
-      .execute();
-  }
-  const start = addDays(isoMonday(todayUtc()), -14);
-  const plan = await planAssignment(db, { athleteId: athlete.id, athleteName: athlete.name, versionId: t.version.id, startDate: start, weekdays: [] });
-  const a = await db
-    .insertInto("template_assignments")
-    .values({ template_id: t.id, version_id: t.version.id, athlete_id: athlete.id, assigned_by: coach.id, start_date: start, weekdays: [], ended_at: null })
-    .returning("id")
-    .executeTakeFirstOrThrow();
-  const rows = await db
-    .insertInto("training_sessions")
-    .values(plan.sessions.map((s, i) => ({ assignment_id: a.id, athlete_id: athlete.id, ordinal: i, planned_date: s.date, date: s.date, title: sessionTitle(s), plan: JSON.stringify(s), logged_at: null, completed_at: null })))
-    .returning(["id", "date"])
-    .execute();
+/** A coach's template assigned to an athlete from two weeks back, with the sessions stored as assignment would. */
+async function assign(db: Kysely<Database>, coach: Person, athlete: Person, model: string, maxes: Record<string, number>) {
+  const template = await createTemplate(db, coach, { title: `T ${athlete.name}`, source: SOURCE(model) });
+  await addTestedMaxes(db, coach.id, athlete.id, maxes, addDays(todayUtc(), -60), (exercise) => exercise.replace(/ /g, "-"));
+  const { plan, rows } = await assignWithSessions(db, { template, athlete, coachId: coach.id, start: addDays(isoMonday(todayUtc()), -14) });
   return { sessions: rows, plan };
 }
 
 describe("logging a session", () => {
-  let scratch: Awaited<ReturnType<typeof createScratchDb>>;
-  let coach: Viewer, tomas: Viewer, maya: Viewer, lena: Viewer;
+  let scratch: Awaited<ReturnType<typeof migratedScratchDb>>;
+  let coach: Person, tomas: Person, maya: Person, lena: Person;
   let session: string;
   let epleySession: string;
 
   beforeAll(async () => {
-    scratch = await createScratchDb();
-    await migrateToLatest(scratch.db);
+    scratch = await migratedScratchDb();
     h.db = scratch.db;
-    const user = async (email: string, name: string, role: Viewer["role"], coachId: string | null = null) => {
-      const u = await createUser(scratch.db, { email, name, passwordHash: "h", role, coachId });
-      return { id: u!.id, name, email, role };
-    };
-    coach = await user("coach@l.test", "Rowan", "coach");
-    tomas = await user("tomas@l.test", "Tomas", "athlete", coach.id);
-    maya = await user("maya@l.test", "Maya", "athlete", coach.id);
-    lena = await user("lena@l.test", "Lena", "athlete", coach.id);
+    coach = await addPerson(scratch.db, "coach@l.test", "Rowan", "coach");
+    tomas = await addPerson(scratch.db, "tomas@l.test", "Tomas", "athlete", coach.id);
+    maya = await addPerson(scratch.db, "maya@l.test", "Maya", "athlete", coach.id);
+    lena = await addPerson(scratch.db, "lena@l.test", "Lena", "athlete", coach.id);
     const t = await assign(scratch.db, coach, tomas, "brzycki", { "back squat": 120, "cable row": 70, "machine row": 90, "bench press": 80 });
     session = t.sessions[0].id;
     const l = await assign(scratch.db, coach, lena, "epley", { "back squat": 120 });
@@ -93,20 +66,20 @@ describe("logging a session", () => {
     await scratch?.drop();
   });
 
-  const put = (sessionId: string, body: unknown) => setsRoute.PUT(req("PUT", `/api/sessions/${sessionId}/log/sets`, body), params({ id: sessionId }));
+  const put = (sessionId: string, body: unknown) => setsRoute.PUT(request("PUT", `/api/sessions/${sessionId}/log/sets`, body), params({ id: sessionId }));
   const squatSet = { exerciseIndex: 0, setIndex: 2, reps: 5, load: 90, rir: 2, done: true };
 
   it("shows the plan to the athlete and their coach, and nothing to another athlete", async () => {
     h.viewer = tomas;
-    const own = await logRoute.GET(req("GET", `/api/sessions/${session}/log`), params({ id: session }));
+    const own = await logRoute.GET(request("GET", `/api/sessions/${session}/log`), params({ id: session }));
     expect(own.status).toBe(200);
     const sheet = (await own.json()).sheet;
     expect(sheet.canWrite).toBe(true);
     expect(sheet.session.plan.exercises.map((e: { name: string }) => e.name)).toEqual(["back squat", "cable row"]);
     h.viewer = coach;
-    expect((await (await logRoute.GET(req("GET", "/x"), params({ id: session }))).json()).sheet.canWrite).toBe(false);
+    expect((await (await logRoute.GET(request("GET", "/x"), params({ id: session }))).json()).sheet.canWrite).toBe(false);
     h.viewer = maya;
-    const other = await logRoute.GET(req("GET", "/x"), params({ id: session }));
+    const other = await logRoute.GET(request("GET", "/x"), params({ id: session }));
     expect(other.status).toBe(404);
     expect((await other.json()).error.code).toBe("not_found");
   });
@@ -167,18 +140,18 @@ describe("logging a session", () => {
 
   it("logs a listed substitute under its own name with its own planned load, and keeps the note", async () => {
     h.viewer = tomas;
-    const swap = await exercisesRoute.PUT(req("PUT", "/x", { exerciseIndex: 1, exercise: "Machine Row", note: "cable station taken" }), params({ id: session }));
+    const swap = await exercisesRoute.PUT(request("PUT", "/x", { exerciseIndex: 1, exercise: "Machine Row", note: "cable station taken" }), params({ id: session }));
     expect(swap.status).toBe(200);
     expect((await swap.json()).exercise).toEqual({ exerciseIndex: 1, exercise: "machine row", note: "cable station taken" });
     const res = await put(session, { exerciseIndex: 1, setIndex: 0, reps: 10, load: 60, rir: 1, done: true });
     expect(res.status).toBe(200);
     const row = await scratch.db.selectFrom("set_logs").selectAll().where("session_id", "=", session).where("exercise_index", "=", 1).executeTakeFirstOrThrow();
-    const sheet = (await (await logRoute.GET(req("GET", "/x"), params({ id: session }))).json()).sheet;
+    const sheet = (await (await logRoute.GET(request("GET", "/x"), params({ id: session }))).json()).sheet;
     const sub = sheet.session.plan.exercises[1].substitutes[0];
     expect(row).toMatchObject({ exercise: "machine row", exercise_key: "machine-row", planned_exercise: "cable row", planned_load: sub.sets[0].load });
     expect(sub.sets[0].load).not.toBe(sheet.session.plan.exercises[1].sets[0].load);
     // Swapping back while a set is ticked as machine row would orphan it.
-    const back = await exercisesRoute.PUT(req("PUT", "/x", { exerciseIndex: 1, exercise: "cable row" }), params({ id: session }));
+    const back = await exercisesRoute.PUT(request("PUT", "/x", { exerciseIndex: 1, exercise: "cable row" }), params({ id: session }));
     expect(back.status).toBe(409);
     expect((await back.json()).error.fields).toHaveProperty("exercise");
   });
@@ -186,10 +159,10 @@ describe("logging a session", () => {
   it("refuses to finish an empty session, then finishes with a summary", async () => {
     h.viewer = tomas;
     const { sessions } = await assign(scratch.db, coach, tomas, "brzycki", {});
-    const empty = await finishRoute.POST(req("POST", "/x"), params({ id: sessions[1].id }));
+    const empty = await finishRoute.POST(request("POST", "/x"), params({ id: sessions[1].id }));
     expect(empty.status).toBe(422);
     expect((await empty.json()).error.fields).toHaveProperty("sets");
-    const done = await finishRoute.POST(req("POST", "/x"), params({ id: session }));
+    const done = await finishRoute.POST(request("POST", "/x"), params({ id: session }));
     expect(done.status).toBe(200);
     const body = await done.json();
     expect(body.completedAt).toBeTruthy();

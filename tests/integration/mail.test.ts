@@ -1,4 +1,3 @@
-import { createServer } from "node:net";
 import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
@@ -7,6 +6,7 @@ import { startFakes } from "../../scripts/fakes.mjs";
 import { readStoredMessages, startSmtpFake } from "../../scripts/fakes/smtp.mjs";
 import { mailConfig, publicBaseUrl } from "../../server/mail/config";
 import { escapeHtml, formatExpiry, invitationMessage, passwordResetMessage } from "../../server/mail/messages";
+import { freePort, type Mailbox, setEnv, startMailbox } from "../support/mailbox";
 
 const h = vi.hoisted(() => ({ viewer: null as null | { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" } }));
 vi.mock("@/server/auth", () => ({ getViewer: async () => h.viewer }));
@@ -17,27 +17,6 @@ const attachmentRoute = await import("../../app/(admin)/admin/mailbox/[id]/[n]/r
 
 const BASE = "https://coach.example.test/";
 const EXPIRES = new Date("2027-03-12T10:05:00Z");
-
-/** Sets environment variables; the returned function puts the earlier values back. */
-function setEnv(values: Record<string, string>): () => void {
-  const before = Object.fromEntries(Object.keys(values).map((k) => [k, process.env[k]]));
-  Object.assign(process.env, values);
-  return () => {
-    for (const [k, v] of Object.entries(before)) {
-      if (v === undefined) delete process.env[k];
-      else process.env[k] = v;
-    }
-  };
-}
-
-function freePort(): Promise<number> {
-  return new Promise((ok) => {
-    const s = createServer().listen(0, "127.0.0.1", () => {
-      const port = (s.address() as { port: number }).port;
-      s.close(() => ok(port));
-    });
-  });
-}
 
 describe("message builders", () => {
   const invite = invitationMessage({ to: "tomas@larchmere.test", athleteName: "Tomas", coachName: "Rowan Hale", baseUrl: BASE, token: "tok_123-abc", expiresAt: EXPIRES, resend: false, days: 7 });
@@ -111,18 +90,14 @@ describe("mail settings", () => {
 
 describe("sending through the local fake SMTP server", () => {
   let dir: string;
-  let fake: Awaited<ReturnType<typeof startSmtpFake>>;
-  let restoreEnv = () => {};
+  let smtp: Mailbox;
 
   beforeAll(async () => {
-    dir = mkdtempSync(join(tmpdir(), "iq-mail-"));
-    fake = await startSmtpFake({ port: 0, dir });
-    restoreEnv = setEnv({ SMTP_HOST: "127.0.0.1", SMTP_PORT: String(fake.port), SMTP_SECURE: "false", SMTP_USER: "anyone", SMTP_PASS: "anything", MAIL_FROM: "Ironquill <no-reply@ironquill.test>", IQ_MAILBOX_DIR: dir });
+    smtp = await startMailbox("iq-mail-", (folder) => ({ SMTP_USER: "anyone", SMTP_PASS: "anything", IQ_MAILBOX_DIR: folder }));
+    dir = smtp.dir;
   });
   afterAll(async () => {
-    await fake?.close();
-    restoreEnv();
-    rmSync(dir, { recursive: true, force: true });
+    await smtp?.close();
   });
 
   const pdf = Buffer.from("%PDF-1.4\n1 0 obj <<>> endobj\n%%EOF\n");
@@ -174,7 +149,7 @@ describe("sending through the local fake SMTP server", () => {
     try {
       await expect(sendMail({ to: "a@x.test", subject: "lost", text: "x" })).rejects.toMatchObject({ code: "unavailable" });
     } finally {
-      process.env.SMTP_PORT = String(fake.port);
+      process.env.SMTP_PORT = String(smtp.port);
     }
   });
 

@@ -1,16 +1,14 @@
 import { createHash } from "node:crypto";
-import { mkdtempSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
 import { setTimeout as sleep } from "node:timers/promises";
 import bcrypt from "bcryptjs";
 import type { Kysely } from "kysely";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { readStoredMessages, startSmtpFake } from "../../scripts/fakes/smtp.mjs";
+import { readStoredMessages } from "../../scripts/fakes/smtp.mjs";
 import type { Database } from "../../db/database";
-import { migrateToLatest } from "../../db/migrate";
 import { createUser } from "../../db/users";
-import { createScratchDb } from "../support/scratchDb";
+import { type Mailbox, startMailbox } from "../support/mailbox";
+import { migratedScratchDb } from "../support/people";
+import { form } from "../support/requests";
 
 const h = vi.hoisted(() => ({ db: null as unknown as Kysely<Database> }));
 vi.mock("@/server/auth", () => ({ getViewer: async () => null, hashPassword: (p: string) => bcrypt.hash(p, 4) }));
@@ -24,33 +22,15 @@ const BASE = "http://ironquill.test:3998";
 const OLD = "old-password-123";
 const NEW = "new-password-456";
 
-/** Sets environment variables; the returned function puts the earlier values back. */
-function setEnv(values: Record<string, string>): () => void {
-  const before = Object.fromEntries(Object.keys(values).map((k) => [k, process.env[k]]));
-  Object.assign(process.env, values);
-  return () => {
-    for (const [k, v] of Object.entries(before)) {
-      if (v === undefined) delete process.env[k];
-      else process.env[k] = v;
-    }
-  };
-}
-
-function form(fields: Record<string, string>): FormData {
-  const f = new FormData();
-  for (const [k, v] of Object.entries(fields)) f.append(k, v);
-  return f;
-}
 const ask = (email: string) => requestResetAction({ sent: false, message: null, fields: {}, email: "" }, form({ email }));
 const setPassword = (token: string, password = NEW, confirm = password) =>
   setNewPasswordAction({ ok: false, message: null, fields: {}, email: null, closed: null }, form({ token, password, confirm }));
 
 describe("password reset", () => {
-  let scratch: Awaited<ReturnType<typeof createScratchDb>>;
-  let fake: Awaited<ReturnType<typeof startSmtpFake>>;
+  let scratch: Awaited<ReturnType<typeof migratedScratchDb>>;
+  let mailbox: Mailbox;
   let dir: string;
   let mayaId: string;
-  let restoreEnv = () => {};
 
   const mailsTo = (to: string) => readStoredMessages(dir).filter((m: { to: string[] }) => m.to.includes(to));
 
@@ -69,11 +49,9 @@ describe("password reset", () => {
   }
 
   beforeAll(async () => {
-    dir = mkdtempSync(join(tmpdir(), "iq-reset-mail-"));
-    fake = await startSmtpFake({ port: 0, dir });
-    restoreEnv = setEnv({ SMTP_HOST: "127.0.0.1", SMTP_PORT: String(fake.port), SMTP_SECURE: "false", SMTP_USER: "", MAIL_FROM: "Ironquill <no-reply@ironquill.test>", NEXTAUTH_URL: BASE });
-    scratch = await createScratchDb();
-    await migrateToLatest(scratch.db);
+    mailbox = await startMailbox("iq-reset-mail-", { SMTP_USER: "", NEXTAUTH_URL: BASE });
+    dir = mailbox.dir;
+    scratch = await migratedScratchDb();
     h.db = scratch.db;
     mayaId = (await createUser(scratch.db, { email: "maya@larchmere.test", name: "Maya Okonjo", passwordHash: await bcrypt.hash(OLD, 4), role: "athlete" }))!.id;
     await createUser(scratch.db, { email: "many@larchmere.test", name: "Many", passwordHash: "x", role: "coach" });
@@ -81,10 +59,8 @@ describe("password reset", () => {
     await scratch.db.updateTable("users").set({ disabled_at: new Date() }).where("id", "=", off!.id).execute();
   });
   afterAll(async () => {
-    await fake?.close();
+    await mailbox?.close();
     await scratch?.drop();
-    restoreEnv();
-    rmSync(dir, { recursive: true, force: true });
   });
 
   it("answers the same for an unknown address as for a real one, and mails only the real one", async () => {

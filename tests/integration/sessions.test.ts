@@ -2,18 +2,17 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import type { Kysely } from "kysely";
 import { addWeeks, format, getISODay, nextThursday } from "date-fns";
 import type { Database } from "../../db/database";
-import { migrateToLatest } from "../../db/migrate";
-import { planAssignment, sessionTitle } from "../../db/recompute";
-import { DomainError } from "../../db/domainError";
 import { getSession, listSessions, moveSession, nextSession, sessionsOn } from "../../db/sessions";
 import { createTemplate } from "../../db/templates";
-import { createUser } from "../../db/users";
-import { createScratchDb } from "../support/scratchDb";
+import { domainFailure } from "../support/failures";
+import { addPerson, migratedScratchDb, type Person } from "../support/people";
+import { params, request } from "../support/requests";
+import { addTestedMaxes, assignWithSessions } from "../support/training";
 
 // The handlers ask for the session and the pool themselves; both are swapped here.
 const h = vi.hoisted(() => ({
   db: null as unknown as Kysely<Database>,
-  viewer: null as null | { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" },
+  viewer: null as null | Person,
 }));
 vi.mock("@/server/auth", () => ({ getViewer: async () => h.viewer }));
 vi.mock("@/db/client", async (importOriginal) => ({ ...(await importOriginal<object>()), getDb: () => h.db }));
@@ -34,60 +33,15 @@ const SOURCE = [
 ].join("\n");
 const START = "2027-01-04";
 
-type Person = { id: string; name: string; email: string; role: "coach" | "athlete" };
-
-/** Users, a template, an assignment and its dated sessions, written the way the assignment code writes them. */
+/** Maxes, a template, an assignment and its dated sessions, written the way the assignment code writes them. */
 async function seedAthlete(db: Kysely<Database>, coach: Person, athlete: Person, start: string) {
-  for (const [exercise, value] of [["back squat", 100], ["bench press", 80], ["deadlift", 140]] as const) {
-    await db
-      .insertInto("athlete_maxes")
-      .values({ athlete_id: athlete.id, exercise, exercise_key: exercise, kind: "1rm", value, units: "kg", measured_on: "2026-12-01", source: "tested", note: null, created_by: coach.id })
-      .execute();
-  }
+  await addTestedMaxes(db, coach.id, athlete.id, { "back squat": 100, "bench press": 80, deadlift: 140 }, "2026-12-01");
   const template = await createTemplate(db, coach, { title: "Calendar test", source: SOURCE });
-  const assignment = await db
-    .insertInto("template_assignments")
-    .values({ template_id: template.id, version_id: template.version.id, athlete_id: athlete.id, assigned_by: coach.id, start_date: start, weekdays: [], ended_at: null })
-    .returning("id")
-    .executeTakeFirstOrThrow();
-  const plan = await planAssignment(db, { athleteId: athlete.id, athleteName: athlete.name, versionId: template.version.id, startDate: start, weekdays: [] });
-  const rows = await db
-    .insertInto("training_sessions")
-    .values(
-      plan.sessions.map((s, ordinal) => ({
-        assignment_id: assignment.id,
-        athlete_id: athlete.id,
-        ordinal,
-        planned_date: s.date,
-        date: s.date,
-        title: sessionTitle(s),
-        plan: JSON.stringify(s),
-        logged_at: null,
-        completed_at: null,
-      })),
-    )
-    .returning(["id", "date", "title"])
-    .execute();
-  return { plan, rows: rows.sort((a, b) => a.date.localeCompare(b.date)) };
+  return assignWithSessions(db, { template, athlete, coachId: coach.id, start });
 }
-
-async function domainFailure(p: Promise<unknown>): Promise<DomainError> {
-  try {
-    await p;
-  } catch (err) {
-    if (err instanceof DomainError) return err;
-    throw err;
-  }
-  throw new Error("expected the call to fail");
-}
-
-const URL_BASE = "http://ironquill.test";
-const request = (method: string, url: string, body?: unknown) =>
-  new Request(URL_BASE + url, { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
-const params = <T extends object>(p: T) => ({ params: Promise.resolve(p) });
 
 describe("training sessions", () => {
-  let scratch: Awaited<ReturnType<typeof createScratchDb>>;
+  let scratch: Awaited<ReturnType<typeof migratedScratchDb>>;
   let coach: Person;
   let stranger: Person;
   let tomas: Person;
@@ -96,17 +50,12 @@ describe("training sessions", () => {
   let mayaRows: { id: string; date: string; title: string }[];
 
   beforeAll(async () => {
-    scratch = await createScratchDb();
-    await migrateToLatest(scratch.db);
+    scratch = await migratedScratchDb();
     h.db = scratch.db;
-    const mk = async (email: string, name: string, role: Person["role"], coachId: string | null = null): Promise<Person> => {
-      const u = await createUser(scratch.db, { email, name, passwordHash: "h", role, coachId });
-      return { id: u!.id, name, email, role };
-    };
-    coach = await mk("coach@s.test", "Rowan", "coach");
-    stranger = await mk("other@s.test", "Sky", "coach");
-    tomas = await mk("tomas@s.test", "Tomas", "athlete", coach.id);
-    maya = await mk("maya@s.test", "Maya", "athlete", coach.id);
+    coach = await addPerson(scratch.db, "coach@s.test", "Rowan", "coach");
+    stranger = await addPerson(scratch.db, "other@s.test", "Sky", "coach");
+    tomas = await addPerson(scratch.db, "tomas@s.test", "Tomas", "athlete", coach.id);
+    maya = await addPerson(scratch.db, "maya@s.test", "Maya", "athlete", coach.id);
     tomasRows = (await seedAthlete(scratch.db, coach, tomas, START)).rows;
     mayaRows = (await seedAthlete(scratch.db, coach, maya, START)).rows;
   });

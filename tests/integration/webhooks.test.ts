@@ -3,6 +3,7 @@ import type { Kysely } from "kysely";
 import Stripe from "stripe";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import type { Database } from "../../db/database";
+import { post } from "../support/requests";
 import { BASE_URL, counts, type Hooks, payOnFake, SECRET_KEY, storeFixture, WEBHOOK_SECRET } from "../support/storeFixture";
 
 // The handlers ask for the session and the pool themselves; both are swapped here.
@@ -15,10 +16,6 @@ const status = await import("../../app/api/store/checkout/status/route");
 const refund = await import("../../app/api/store/sales/[id]/refund/route");
 
 type World = Awaited<ReturnType<typeof storeFixture>>;
-
-function post(url: string, body: unknown): Request {
-  return new Request(BASE_URL + url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-}
 
 function webhookRequest(payload: string, signature: string): Request {
   return new Request(`${BASE_URL}/api/webhooks/payments`, { method: "POST", headers: { "content-type": "application/json", "stripe-signature": signature }, body: payload });

@@ -8,23 +8,18 @@
  * The calling test file mocks @/server/auth (getViewer → h.viewer) and
  * @/db/client (getDb → h.db) before calling `storeFixture(h)`.
  */
-import { mkdtempSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
 import { type Kysely, sql } from "kysely";
 import type { Database } from "../../db/database";
 import { saveListing } from "../../db/listings";
-import { migrateToLatest } from "../../db/migrate";
 import { createTemplate } from "../../db/templates";
-import { createUser } from "../../db/users";
 import { startPaymentsFake } from "../../scripts/fakes/payments.mjs";
-import { startSmtpFake } from "../../scripts/fakes/smtp.mjs";
-import { createScratchDb } from "./scratchDb";
+import { startMailbox } from "./mailbox";
+import { addPerson, migratedScratchDb, type Person } from "./people";
+import { TEST_ORIGIN } from "./requests";
 
-export type Viewer = { id: string; name: string; email: string; role: "admin" | "coach" | "athlete" };
-export type Hooks = { db: Kysely<Database>; viewer: Viewer | null };
+export type Hooks = { db: Kysely<Database>; viewer: Person | null };
 
-export const BASE_URL = "http://ironquill.test";
+export const BASE_URL = TEST_ORIGIN;
 export const WEBHOOK_SECRET = "whsec_store_tests_only";
 export const SECRET_KEY = "sk_test_store_tests_only";
 
@@ -39,25 +34,17 @@ export const SOURCE = [
   "",
 ].join("\n");
 
-async function person(db: Kysely<Database>, name: string, role: Viewer["role"]): Promise<Viewer> {
-  const email = `${name.toLowerCase()}@store.test`;
-  const row = await createUser(db, { email, name, passwordHash: "h", role, coachId: null });
-  return { id: row!.id, name, email, role };
-}
-
 export async function storeFixture(h: Hooks) {
-  const scratch = await createScratchDb();
-  await migrateToLatest(scratch.db);
+  const scratch = await migratedScratchDb();
   h.db = scratch.db;
-  const coach = await person(scratch.db, "Rowan", "coach");
-  const rival = await person(scratch.db, "Sky", "coach");
-  const buyer = await person(scratch.db, "Ines", "athlete");
-  const admin = await person(scratch.db, "Pat", "admin");
+  const coach = await addPerson(scratch.db, "rowan@store.test", "Rowan", "coach");
+  const rival = await addPerson(scratch.db, "sky@store.test", "Sky", "coach");
+  const buyer = await addPerson(scratch.db, "ines@store.test", "Ines", "athlete");
+  const admin = await addPerson(scratch.db, "pat@store.test", "Pat", "admin");
   const template = await createTemplate(scratch.db, coach, { title: "Store test programme", tags: ["strength", "4 weeks"], source: SOURCE });
   const listing = await saveListing(scratch.db, coach, template.id, { priceMinor: 2999, currency: "eur", summary: "Two days a week.", level: "intermediate", versionNumber: 1, onSale: true });
 
-  const mailDir = mkdtempSync(join(tmpdir(), "iq-store-mail-"));
-  const smtp = await startSmtpFake({ port: 0, dir: mailDir });
+  const mailbox = await startMailbox("iq-store-mail-", { SMTP_USER: "" });
 
   const webhook = await import("../../app/api/webhooks/payments/route");
   const fake = await startPaymentsFake({
@@ -75,17 +62,12 @@ export async function storeFixture(h: Hooks) {
     STRIPE_API_PORT: String(fake.port),
     STRIPE_API_PROTOCOL: "http",
     NEXTAUTH_URL: BASE_URL,
-    SMTP_HOST: "127.0.0.1",
-    SMTP_PORT: String(smtp.port),
-    SMTP_SECURE: "false",
-    SMTP_USER: "",
-    MAIL_FROM: "Ironquill <no-reply@ironquill.test>",
   });
 
   return {
     db: scratch.db,
     fake,
-    mailDir,
+    mailDir: mailbox.dir,
     coach,
     rival,
     buyer,
@@ -96,8 +78,7 @@ export async function storeFixture(h: Hooks) {
     async close() {
       await fake.idle();
       await fake.close();
-      await smtp.close();
-      rmSync(mailDir, { recursive: true, force: true });
+      await mailbox.close();
       await scratch.drop();
     },
   };

@@ -67,6 +67,8 @@ export default async function AthleteToday() {
           When your coach assigns you a programme, today&apos;s session shows here with your own loads and the plates for each side of the bar.
         </EmptyState>
       )}
+      {/* The caution stays on a rest day too: the next session's loads are a tap away. */}
+      {sessions.length === 0 ? <Caution className="mt-6" /> : null}
       <p className="mt-6 text-center">
         <Link href="/athlete/calendar" className="inline-flex min-h-11 items-center text-base font-semibold text-ember-700 underline">
           Calendar

@@ -1,31 +1,25 @@
 /**
  * JSON shapes of the assignment and job API, for the pages that call it.
- * Types only. Dates of sessions are "YYYY-MM-DD"; timestamps are ISO 8601
- * strings. Failures are `ApiError` (app/api/templates/types.ts).
+ * Types only, taken from the query modules where the JSON is theirs. Dates of
+ * sessions are "YYYY-MM-DD"; timestamps are ISO 8601 strings. Failures are
+ * `ApiError` (app/api/templates/types.ts).
  */
+import type { AssignmentSummary as StoredAssignmentSummary, AssignOutcome, EndResult } from "@/db/assignments";
+import type { UpgradePreview, UpgradeResult } from "@/db/assignmentUpgrade";
+import type { JobView as StoredJobView } from "@/db/jobs";
+import type { AsJson } from "../json";
 
-export type Diagnostic = { severity: "error" | "warning" | "info"; code: string; message: string; line: number | null };
+export type { AssignOutcome } from "@/db/assignments";
+export type { ExerciseChange, SessionChange } from "@/db/assignmentUpgrade";
+export type { JobStatus } from "@/db/database";
+export type { ExpandDiagnostic as Diagnostic } from "@/lib/load/types";
 
-export type AssignOutcome =
-  | { athleteId: string; athleteName: string; status: "assigned"; assignmentId: string; sessions: number; firstDate: string | null; diagnostics: Diagnostic[] }
-  | { athleteId: string; athleteName: string | null; status: "failed"; error: { code: string; message: string } };
-
-export type JobStatus = "queued" | "running" | "done" | "failed";
-
-/** GET /api/jobs/[id]; also the `job` of POST /api/assignments (id null when it was done inline). */
-export type JobView = {
-  id: string | null;
-  kind: string;
-  status: JobStatus;
-  total: number;
-  done: number;
-  failed: number;
-  /** For "bulk-assign": one outcome per athlete handled so far. */
-  result: { outcomes?: AssignOutcome[] } | null;
-  error: string | null;
-  createdAt: string;
-  finishedAt: string | null;
-};
+/**
+ * GET /api/jobs/[id]; also the `job` of POST /api/assignments (id null when it
+ * was done inline). For "bulk-assign", `result` holds one outcome per athlete
+ * handled so far.
+ */
+export type JobView = Omit<AsJson<StoredJobView>, "id" | "result"> & { id: string | null; result: { outcomes?: AssignOutcome[] } | null };
 export type JobResponse = { job: JobView };
 
 /** POST /api/assignments body. `weekdays` go to days without a weekday tag, in the order given. */
@@ -33,57 +27,15 @@ export type AssignBody = { versionId: string; athleteIds: string[]; startDate: s
 /** POST /api/assignments: 201 with a finished job for one athlete, 202 with a queued one for several. */
 export type AssignResponse = JobResponse;
 
-export type AssignmentSummary = {
-  id: string;
-  athleteId: string;
-  templateId: string;
-  templateTitle: string;
-  version: { id: string; number: number };
-  /** Only when the viewer owns the template. */
-  latestVersion: { id: string; number: number } | null;
-  newerVersionAvailable: boolean;
-  canManage: boolean;
-  startDate: string;
-  weekdays: string[];
-  status: "active" | "ended";
-  autoRegulate: boolean;
-  createdAt: string;
-  endedAt: string | null;
-  sessions: { total: number; logged: number; upcoming: number };
-  nextSessionDate: string | null;
-};
+export type AssignmentSummary = AsJson<StoredAssignmentSummary>;
 /** GET /api/assignments?athleteId=… (active first). */
 export type AssignmentListResponse = { assignments: AssignmentSummary[] };
 
 /** DELETE /api/assignments/[id] */
-export type EndResponse = { assignmentId: string; status: "ended"; removedSessions: number; keptSessions: number };
-
-export type ExerciseChange = {
-  change: "added" | "removed" | "changed";
-  name: string;
-  before: string | null;
-  after: string | null;
-  aspects: ("sets" | "reps" | "load" | "effort" | "rest" | "details")[];
-};
-export type SessionChange = { ordinal: number; date: string; title: string; previousTitle: string | null; change: "added" | "removed" | "changed"; exercises: ExerciseChange[] };
+export type EndResponse = EndResult;
 
 /** GET /api/assignments/[id]/upgrade?versionId=… */
-export type UpgradePreviewResponse = {
-  preview: {
-    assignmentId: string;
-    athleteId: string;
-    templateTitle: string;
-    from: { id: string; number: number };
-    to: { id: string; number: number };
-    today: string;
-    sessions: SessionChange[];
-    unchanged: number;
-    kept: number;
-    diagnostics: Diagnostic[];
-  };
-};
+export type UpgradePreviewResponse = { preview: UpgradePreview };
 
 /** POST /api/assignments/[id]/upgrade { versionId } */
-export type UpgradeResponse = {
-  upgrade: { assignmentId: string; version: { id: string; number: number }; rewritten: number; dropped: number; kept: number; diagnostics: Diagnostic[] };
-};
+export type UpgradeResponse = { upgrade: UpgradeResult };

@@ -4,47 +4,24 @@
  * `amountMinor`: 2999 = 29.99) with a lower-case ISO 4217 code; dates travel
  * as ISO 8601 strings. Failures are the app's usual `{ error: { code, message, fields } }`.
  */
-import type { Programme } from "@/lib/notation/model";
+import type { AssignOutcome } from "@/db/assignments";
+import type { CataloguePage } from "@/db/catalogue";
+import type { AdminListing as StoredAdminListing, CoachListing as StoredCoachListing } from "@/db/listings";
+import type { OwnedCopy, PurchaseStatusView, Receipt as StoredReceipt } from "@/db/purchases";
+import type { MonthTotal, SaleRow as StoredSaleRow } from "@/db/sales";
+import type { AsJson } from "../json";
 
-export type Level = "beginner" | "intermediate" | "advanced";
-export type ListingState = "on_sale" | "withdrawn" | "unlisted_by_admin";
+export type { ListingLevel as Level } from "@/db/database";
+export type { ListingState } from "@/db/listings";
+export type { MonthTotal } from "@/db/sales";
 
-/** GET /api/store/listings?q=&tag=&weeks=1-4|5-8|9-12|13+&days=1..7&level=&page= (public). */
-export type CatalogueResponse = {
-  items: {
-    id: string;
-    slug: string;
-    title: string;
-    summary: string;
-    tags: string[];
-    coachName: string;
-    priceMinor: number;
-    currency: string;
-    level: Level;
-    weeks: number;
-    daysPerWeek: number;
-  }[];
-  total: number;
-  page: number;
-  pageSize: number;
-  /** Every tag in use across the store, for the filter. */
-  tags: string[];
-};
+/**
+ * GET /api/store/listings?q=&tag=&weeks=1-4|5-8|9-12|13+&days=1..7&level=&page= (public).
+ * `tags` is every tag in use across the store, for the filter.
+ */
+export type CatalogueResponse = CataloguePage;
 
-export type CoachListing = {
-  id: string;
-  slug: string;
-  priceMinor: number;
-  currency: string;
-  summary: string;
-  level: Level;
-  versionNumber: number;
-  weeks: number;
-  daysPerWeek: number;
-  state: ListingState;
-  unlistedReason: string | null;
-  updatedAt: string;
-};
+export type CoachListing = AsJson<StoredCoachListing>;
 
 /** GET and PUT /api/store/templates/[id]/listing (coach); PUT takes { priceMinor, currency, summary, level, versionNumber, onSale }. */
 export type ListingResponse = { listing: CoachListing | null };
@@ -56,47 +33,20 @@ export type AccountResponse = { id: string };
 export type CheckoutResponse = { url: string; purchaseId: string };
 
 /** GET /api/store/checkout/status?session_id= (athlete): "pending" until the provider's signed event arrived. */
-export type CheckoutStatusResponse = { purchaseId: string; status: "pending" | "paid" | "refunded"; title: string; copyTemplateId: string | null };
+export type CheckoutStatusResponse = PurchaseStatusView;
 
-export type Receipt = {
-  purchaseId: string;
-  number: string;
-  title: string;
-  amountMinor: number;
-  currency: string;
-  status: "pending" | "paid" | "refunded";
-  paidAt: string | null;
-  refundedAt: string | null;
-  buyerName: string;
-  buyerEmail: string;
-  sellerName: string;
-  paymentReference: string | null;
-};
+export type Receipt = AsJson<StoredReceipt>;
 
 /** GET /api/store/purchases (athlete). */
 export type PurchasesResponse = { purchases: (Receipt & { copyTemplateId: string | null })[] };
 
 /** GET /api/store/purchases/[id] (athlete): `copy` is null unless paid and not refunded. */
-export type PurchaseResponse = { receipt: Receipt; copy: { templateId: string; versionId: string; programme: Programme } | null };
+export type PurchaseResponse = AsJson<OwnedCopy>;
 
 /** POST /api/store/purchases/[id]/start { startDate, weekdays } (athlete, 201). */
-export type StartResponse = { assignmentId: string; sessions: number; firstDate: string | null; diagnostics: { severity: string; code: string; message: string; line: number | null }[] };
+export type StartResponse = Pick<Extract<AssignOutcome, { status: "assigned" }>, "assignmentId" | "sessions" | "firstDate" | "diagnostics">;
 
-export type SaleRow = {
-  id: string;
-  number: string;
-  date: string;
-  title: string;
-  buyerName: string;
-  buyerEmail: string;
-  sellerName: string;
-  amountMinor: number;
-  currency: string;
-  status: "paid" | "refunded";
-  refundedAt: string | null;
-};
-
-export type MonthTotal = { month: string; currency: string; sold: number; grossMinor: number; refundedMinor: number; netMinor: number };
+export type SaleRow = AsJson<StoredSaleRow>;
 
 /** GET /api/store/sales (coach: own; admin: all). */
 export type SalesResponse = { rows: SaleRow[]; months: MonthTotal[] };
@@ -104,19 +54,7 @@ export type SalesResponse = { rows: SaleRow[]; months: MonthTotal[] };
 /** POST /api/store/sales/[id]/refund (coach or admin). */
 export type RefundResponse = { purchaseId: string; refundId: string };
 
-export type AdminListing = {
-  id: string;
-  slug: string;
-  title: string;
-  sellerName: string;
-  sellerEmail: string;
-  priceMinor: number;
-  currency: string;
-  state: ListingState;
-  unlistedReason: string | null;
-  sales: number;
-  updatedAt: string;
-};
+export type AdminListing = AsJson<StoredAdminListing>;
 
 /** GET /api/store/admin/listings; PATCH /api/store/admin/listings/[id] { unlisted, reason } answers { listing }. */
 export type AdminListingsResponse = { listings: AdminListing[] };

@@ -1,8 +1,8 @@
 import { getDb } from "@/db/client";
 import { getVersion } from "@/db/templateVersions";
+import { slugify } from "@/lib/slug";
 import { requireViewer } from "@/server/guard";
 import { answer, notFound, ok, parseWith, queryOf } from "../../../_lib/http";
-import { slugify } from "../../../_lib/slug";
 import { versionParamsSchema, versionQuerySchema } from "./schema";
 
 type Ctx = { params: Promise<{ id: string; number: string }> };
@@ -16,7 +16,7 @@ export async function GET(req: Request, ctx: Ctx) {
     const version = await getVersion(getDb(), viewer, id, number);
     if (!version) throw notFound("That template or version does not exist or is not yours.");
     if (format !== "iq") return ok({ version });
-    const filename = `${slugify(version.templateTitle)}-v${version.number}.iq`;
+    const filename = `${slugify(version.templateTitle, "template")}-v${version.number}.iq`;
     return new Response(version.source, {
       headers: {
         "content-type": "text/plain; charset=utf-8",
