@@ -30,7 +30,8 @@ function fontDir(): string {
   } catch {
     // A bundled chunk may not have a file URL; the working directory then has to do.
   }
-  const found = candidates.find((dir) => existsSync(join(dir, FILES.regular)));
+  // The ignore comments keep the bundler from tracing the whole project for these runtime paths.
+  const found = candidates.find((dir) => existsSync(/*turbopackIgnore: true*/ join(/*turbopackIgnore: true*/ dir, FILES.regular)));
   if (!found) throw new Error(`card fonts not found: looked for ${FILES.regular} in ${candidates.join(", ")}`);
   return found;
 }
@@ -43,8 +44,8 @@ export function registerCardFonts(): void {
   Font.register({
     family: CARD_FONT,
     fonts: [
-      { src: join(dir, FILES.regular), fontWeight: 400 },
-      { src: join(dir, FILES.bold), fontWeight: 700 },
+      { src: join(/*turbopackIgnore: true*/ dir, FILES.regular), fontWeight: 400 },
+      { src: join(/*turbopackIgnore: true*/ dir, FILES.bold), fontWeight: 700 },
     ],
   });
   // Exercise names and loads must never break mid-word ("dead-lift", "67.-5").
