@@ -53,8 +53,10 @@ function sourceFingerprint() {
   const git = (args) => spawnSync("git", args, { cwd: root, encoding: "utf8" });
   const head = git(["rev-parse", "HEAD"]);
   if (head.status !== 0) return "";
-  const dirty = git(["status", "--porcelain", "--untracked-files=normal"]).stdout ?? "";
-  return createHash("sha256").update(head.stdout).update(dirty).digest("hex");
+  // Contents, not just names: editing an already-changed file must still trigger a rebuild.
+  const changed = git(["diff", "HEAD"]).stdout ?? "";
+  const untracked = git(["status", "--porcelain", "--untracked-files=normal"]).stdout ?? "";
+  return createHash("sha256").update(head.stdout).update(changed).update(untracked).digest("hex");
 }
 
 process.stdout.write(`• starting the local mail catcher on 127.0.0.1:${env.SMTP_PORT}\n`);

@@ -1,15 +1,17 @@
 "use client";
 /**
  * The notation editor: CodeMirror 6 with the .iq language. The parent owns the
- * text and the parse; diagnostics are pushed in (one parse per change serves
- * both the underlines and the preview).
+ * text and the model; diagnostics are pushed in. Each change hands over the
+ * editor's own syntax tree, which CodeMirror reparses incrementally, so the
+ * model is built without parsing the whole text a second time.
  */
 import { autocompletion, closeBrackets, closeBracketsKeymap, completionKeymap } from "@codemirror/autocomplete";
 import { defaultKeymap, history, historyKeymap, indentWithTab } from "@codemirror/commands";
-import { bracketMatching, foldGutter, foldKeymap, syntaxHighlighting } from "@codemirror/language";
-import { type Diagnostic as CmDiagnostic, lintGutter, setDiagnostics } from "@codemirror/lint";
+import { bracketMatching, ensureSyntaxTree, foldGutter, foldKeymap, syntaxHighlighting } from "@codemirror/language";
+import { type Diagnostic as CmDiagnostic, forEachDiagnostic, lintGutter, setDiagnostics } from "@codemirror/lint";
 import { EditorSelection, EditorState } from "@codemirror/state";
 import { drawSelection, EditorView, highlightActiveLine, highlightActiveLineGutter, keymap, lineNumbers, placeholder } from "@codemirror/view";
+import type { Tree } from "@lezer/common";
 import { forwardRef, useEffect, useImperativeHandle, useRef } from "react";
 import type { Diagnostic } from "@/lib/notation/model";
 import { iq, iqHighlightStyle, iqTheme } from "./language";
@@ -26,11 +28,32 @@ type Props = {
   initialText: string;
   diagnostics: readonly Diagnostic[];
   exerciseNames: readonly string[];
-  onChange(text: string): void;
+  /**
+   * The new text, and a way to get the editor's syntax tree of all of it (null
+   * when it cannot be finished in reasonable time; then parse the text instead).
+   */
+  onChange(text: string, syntax: () => Tree | null): void;
   onFormat(): void;
   onSave?(): void;
   ariaLabel?: string;
 };
+
+/**
+ * Time the update may spend finishing the incremental parse. The language has
+ * almost always finished it already; a fresh parse of the text would cost more.
+ */
+const TREE_BUDGET_MS = 2000;
+
+/** The diagnostics the editor shows now (mapped through edits) are exactly these. */
+function sameAsShown(state: EditorState, diags: readonly CmDiagnostic[]): boolean {
+  let i = 0;
+  let same = true;
+  forEachDiagnostic(state, (d, from, to) => {
+    const n = diags[i++];
+    if (!n || n.from !== from || n.to !== to || n.severity !== d.severity || n.message !== d.message) same = false;
+  });
+  return same && i === diags.length;
+}
 
 export const IqEditor = forwardRef<IqEditorHandle, Props>(function IqEditor(props, ref) {
   const host = useRef<HTMLDivElement>(null);
@@ -73,7 +96,7 @@ export const IqEditor = forwardRef<IqEditorHandle, Props>(function IqEditor(prop
             indentWithTab,
           ]),
           EditorView.updateListener.of((u) => {
-            if (u.docChanged) latest.current.onChange(u.state.doc.toString());
+            if (u.docChanged) latest.current.onChange(u.state.doc.toString(), () => ensureSyntaxTree(u.state, u.state.doc.length, TREE_BUDGET_MS));
           }),
         ],
       }),
@@ -95,7 +118,8 @@ export const IqEditor = forwardRef<IqEditorHandle, Props>(function IqEditor(prop
       severity: d.severity,
       message: d.message,
     }));
-    v.dispatch(setDiagnostics(v.state, diags));
+    // Most keystrokes leave the problems where CodeMirror has already mapped them.
+    if (!sameAsShown(v.state, diags)) v.dispatch(setDiagnostics(v.state, diags));
   }, [props.diagnostics]);
 
   useImperativeHandle(ref, () => ({

@@ -1,13 +1,16 @@
 "use client";
 /**
  * The coach's workbench: the notation editor beside a live preview worked for
- * a preview athlete. One parse per change feeds the underlines, the problem
- * list and the preview; the draft is kept locally at once and on the server
- * shortly after, so a closed tab loses nothing.
+ * a preview athlete. One model per change, built from the editor's own
+ * incrementally parsed tree, feeds the underlines, the problem list and the
+ * preview; the draft is kept locally (once the browser is idle, and at once
+ * when the page is hidden) and on the server shortly after, so a closed tab
+ * loses nothing.
  */
-import { useCallback, useDeferredValue, useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
 import { expandProgramme } from "@/lib/load";
-import { formatProgramme, parseProgramme } from "@/lib/notation";
+import type { Tree } from "@lezer/common";
+import { buildProgramme, formatProgramme, LineCache, parseProgramme } from "@/lib/notation";
 import type { Diagnostic } from "@/lib/notation/model";
 import { CATALOGUE } from "@/lib/exercises/catalogue";
 import { resolveExercise } from "@/lib/exercises/resolve";
@@ -16,6 +19,8 @@ import { WeekPreview } from "../preview/WeekPreview";
 import { IqEditor, type IqEditorHandle } from "./IqEditor";
 import { ProblemList, type Problem } from "./ProblemList";
 import { PreviewAthletePanel } from "./PreviewAthletePanel";
+import { useLocalDraft } from "./useLocalDraft";
+import { useSameData } from "./useSameData";
 import { nextMonday, SAMPLE_MAXES_KG, sampleProfile } from "./sampleProfile";
 
 export type SaveState = { kind: "idle" } | { kind: "saving" } | { kind: "saved"; message: string } | { kind: "error"; message: string };
@@ -36,7 +41,9 @@ const CATALOGUE_NAMES = CATALOGUE.flatMap((e) => [e.name, ...e.aliases]);
 
 export function Workbench({ draftKey, initialText, libraryNames = [], onSave, onDraft, saveLabel = "Save version", toolbar }: Props) {
   const editor = useRef<IqEditorHandle>(null);
-  const [text, setText] = useState(initialText);
+  // The tree, when the editor gave one, is of exactly this text.
+  const [source, setSource] = useState<{ text: string; tree: Tree | null }>({ text: initialText, tree: null });
+  const text = source.text;
   const [save, setSave] = useState<SaveState>({ kind: "idle" });
   const [week, setWeek] = useState(1);
   const [units, setUnits] = useState<"kg" | "lb">("kg");
@@ -45,45 +52,56 @@ export function Workbench({ draftKey, initialText, libraryNames = [], onSave, on
   const start = useMemo(() => nextMonday(), []);
   const known = useMemo(() => [...new Set([...CATALOGUE_NAMES, ...libraryNames])], [libraryNames]);
 
-  const parsed = useMemo(() => parseProgramme(text, { knownExercises: known }), [text, known]);
-  // The preview may lag a frame behind fast typing; the underlines never do.
-  const deferred = useDeferredValue(parsed);
-  const totalWeeks = Math.max(1, deferred.programme.blocks.reduce((s, b) => s + b.weeks, 0));
+  // Unchanged exercise lines are taken over from the last build (the model is only read here).
+  const lineCache = useRef<LineCache | null>(null);
+  const parsed = useMemo(() => {
+    const options = { knownExercises: known, cache: (lineCache.current ??= new LineCache()) };
+    return source.tree ? buildProgramme(source.tree, source.text, options) : parseProgramme(source.text, options);
+  }, [source, known]);
+  // Underlines and preview change in the same frame. While a line is being typed it
+  // is often incomplete and left out of the model: an equal model keeps the last
+  // one, so nothing below is worked again; otherwise the preview days are memoised
+  // and only the day that changed renders again.
+  const programme = useSameData(parsed.programme);
+  const totalWeeks = Math.max(1, programme.blocks.reduce((s, b) => s + b.weeks, 0));
   const shownWeek = Math.min(week, totalWeeks);
   const profile = useMemo(() => sampleProfile(units, maxes), [units, maxes]);
-  const expansion = useMemo(() => expandProgramme(deferred.programme, profile, { start, weeks: shownWeek }), [deferred.programme, profile, start, shownWeek]);
+  const expansion = useMemo(() => expandProgramme(programme, profile, { start, weeks: shownWeek }), [programme, profile, start, shownWeek]);
   const sessions = useMemo(() => expansion.sessions.filter((s) => s.weekInProgramme === shownWeek), [expansion, shownWeek]);
   const rotations = useMemo(() => {
     const m = new Map<number, string[]>();
-    for (const b of deferred.programme.blocks) for (const d of b.days) for (const e of d.exercises) if (e.variations.length > 1) m.set(e.line, e.variations);
+    for (const b of programme.blocks) for (const d of b.days) for (const e of d.exercises) if (e.variations.length > 1) m.set(e.line, e.variations);
     return m;
-  }, [deferred.programme]);
-  const usedNames = useMemo(() => {
-    const names = new Set<string>();
-    for (const b of deferred.programme.blocks) for (const d of b.days) for (const e of d.exercises) if (e.intensity) for (const n of [...e.variations, ...e.substitutes]) names.add(resolveExercise(n)?.name ?? n.toLowerCase());
-    return [...names];
-  }, [deferred.programme]);
+  }, [programme]);
+  const usedNames = useSameData(useMemo(() => {
+    const written = new Set<string>();
+    for (const b of programme.blocks) for (const d of b.days) for (const e of d.exercises) if (e.intensity) for (const n of [...e.variations, ...e.substitutes]) written.add(n);
+    // The same few names come back on many lines: resolve each spelling once.
+    return [...new Set([...written].map((n) => resolveExercise(n)?.name ?? n.toLowerCase()))];
+  }, [programme]));
 
-  const problems: Problem[] = useMemo(() => {
+  const problems: Problem[] = useSameData(useMemo(() => {
     const fromNotation = parsed.diagnostics.map((d: Diagnostic) => ({ line: d.line, column: d.column, severity: d.severity, message: d.message }));
     const fromLoads = expansion.diagnostics
       .filter((d) => d.line !== null && d.code !== "no-max")
       .map((d) => ({ line: d.line as number, column: 1, severity: d.severity, message: d.message }));
     return [...fromNotation, ...fromLoads].sort((a, b) => a.line - b.line || a.column - b.column);
-  }, [parsed.diagnostics, expansion.diagnostics]);
+  }, [parsed.diagnostics, expansion.diagnostics]));
   const errorCount = parsed.diagnostics.filter((d) => d.severity === "error").length;
 
   // Keystroke → repaint, measured by the editor benchmark (performance marks, not a test).
-  // Measured once the preview shows the change (the deferred parse has caught up).
+  // Measured at the first frame after the preview shows the change.
   useLayoutEffect(() => {
-    if (deferred !== parsed || typeof performance === "undefined" || performance.getEntriesByName("iq:change").length === 0) return;
+    if (typeof performance === "undefined" || performance.getEntriesByName("iq:change").length === 0) return;
     requestAnimationFrame(() => {
+      // Two commits before one frame measure once.
+      if (performance.getEntriesByName("iq:change").length === 0) return;
       performance.measure("iq:repaint", "iq:change");
       performance.clearMarks("iq:change");
     });
-  }, [sessions, parsed, deferred]);
+  }, [sessions, parsed]);
 
-  // Local copy at once; a newer local copy than the server's is offered back on load.
+  // A newer local copy than the server's is offered back on load.
   useEffect(() => {
     try {
       const raw = localStorage.getItem(`iq-draft:${draftKey}`);
@@ -96,25 +114,24 @@ export function Workbench({ draftKey, initialText, libraryNames = [], onSave, on
     }
   }, [draftKey, initialText]);
 
+  const localDraft = useLocalDraft(draftKey, text, initialText);
   const latestText = useRef(text);
   useEffect(() => {
     latestText.current = text;
-    if (text === initialText) return;
-    try {
-      localStorage.setItem(`iq-draft:${draftKey}`, JSON.stringify({ text, at: new Date().toISOString() }));
-    } catch {
-      /* full or blocked storage: the server draft still applies */
-    }
-    if (!onDraft) return;
+    if (text === initialText || !onDraft) return;
     const t = setTimeout(() => void onDraft(text).catch(() => undefined), 800);
     return () => clearTimeout(t);
-  }, [text, draftKey, initialText, onDraft]);
+  }, [text, initialText, onDraft]);
 
-  const onChange = useCallback((next: string) => {
+  const onChange = useCallback((next: string, syntax: () => Tree | null) => {
     performance.mark("iq:change");
-    setText(next);
+    setSource({ text: next, tree: syntax() });
     setSave((s) => (s.kind === "saved" || s.kind === "error" ? { kind: "idle" } : s));
   }, []);
+
+  // Stable, so the memoised preview days do not render again for a new handler.
+  const jumpTo = useCallback((line: number, column: number) => editor.current?.jumpTo(line, column), []);
+  const jumpToLine = useCallback((line: number) => editor.current?.jumpTo(line, 1), []);
 
   const format = useCallback(() => editor.current?.replaceAll(formatProgramme(latestText.current)), []);
 
@@ -122,14 +139,8 @@ export function Workbench({ draftKey, initialText, libraryNames = [], onSave, on
     setSave({ kind: "saving" });
     const result = await onSave(latestText.current).catch(() => ({ kind: "error", message: "Could not reach Ironquill; your text is kept here. Try again." }) as SaveState);
     setSave(result);
-    if (result.kind === "saved") {
-      try {
-        localStorage.removeItem(`iq-draft:${draftKey}`);
-      } catch {
-        /* nothing to clear */
-      }
-    }
-  }, [onSave, draftKey]);
+    if (result.kind === "saved") localDraft.forget();
+  }, [onSave, localDraft]);
 
   // Same athlete in the other unit: 1 lb = 0.45359237 kg, maxes to the nearest 2.5 kg / 5 lb.
   function switchUnits(next: "kg" | "lb") {
@@ -142,6 +153,7 @@ export function Workbench({ draftKey, initialText, libraryNames = [], onSave, on
 
   function restoreLocal() {
     try {
+      localDraft.flush();
       const raw = localStorage.getItem(`iq-draft:${draftKey}`);
       if (raw) editor.current?.replaceAll((JSON.parse(raw) as { text: string }).text);
     } finally {
@@ -174,7 +186,7 @@ export function Workbench({ draftKey, initialText, libraryNames = [], onSave, on
         <div className="panel h-[55dvh] overflow-hidden lg:h-[calc(100dvh-16rem)]">
           <IqEditor ref={editor} initialText={initialText} diagnostics={parsed.diagnostics} exerciseNames={known} onChange={onChange} onFormat={format} onSave={() => void doSave()} />
         </div>
-        <ProblemList problems={problems} onJump={(line, column) => editor.current?.jumpTo(line, column)} />
+        <ProblemList problems={problems} onJump={jumpTo} />
       </section>
 
       <section aria-label="Preview" className="flex min-w-0 flex-col gap-3">
@@ -188,7 +200,7 @@ export function Workbench({ draftKey, initialText, libraryNames = [], onSave, on
         </div>
         <PreviewAthletePanel units={units} onUnits={switchUnits} maxes={maxes} onMaxes={setMaxes} names={usedNames} />
         <div className="lg:max-h-[calc(100dvh-22rem)] lg:overflow-y-auto">
-          <WeekPreview sessions={sessions} rotations={rotations} onLine={(line) => editor.current?.jumpTo(line, 1)} />
+          <WeekPreview sessions={sessions} rotations={rotations} onLine={jumpToLine} />
         </div>
         <Caution />
       </section>

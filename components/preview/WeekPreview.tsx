@@ -2,43 +2,64 @@
  * One programme week as the athlete will get it: each day with its lifts,
  * warm-up ramps, worked loads and plates per side, rotations and substitutes.
  */
+import { memo } from "react";
 import type { ExerciseOut, Session } from "@/lib/load/types";
 import { groupSets, loadText, platesText, repsText, restText } from "./format";
+import { sameData } from "./sameData";
 
 const DATE = new Intl.DateTimeFormat("en-GB", { weekday: "short", day: "numeric", month: "short", timeZone: "UTC" });
 
 type Rotations = ReadonlyMap<number, readonly string[]>;
+type Variations = readonly (readonly string[] | undefined)[];
+type OnLine = (line: number) => void;
 
-export function WeekPreview({ sessions, rotations, onLine }: { sessions: readonly Session[]; rotations?: Rotations; onLine?: (line: number) => void }) {
+/**
+ * The editor works a new week on every keystroke, most of it equal to the last:
+ * days and rows are memoised on their content so only what changed renders again
+ * (a handler passed in must keep its identity between renders for this to work).
+ */
+export const WeekPreview = memo(function WeekPreview({ sessions, rotations, onLine }: { sessions: readonly Session[]; rotations?: Rotations; onLine?: OnLine }) {
   if (sessions.length === 0) {
     return <p className="px-4 py-8 text-center text-sm text-iron-400">No training days in this week yet. Add a <code className="font-mono">day</code> line and some lifts.</p>;
   }
   return (
     <div className="grid gap-3" data-testid="week-preview">
       {sessions.map((s) => (
-        <section key={`${s.date}-${s.dayLine}`} className="rounded-lg border border-chalk-300 bg-white" aria-label={`${s.day}, ${s.date}`}>
-          <header className="flex flex-wrap items-baseline justify-between gap-2 border-b border-chalk-200 px-3 py-2">
-            <h3 className="text-sm font-bold text-iron">
-              {s.day}
-              {s.deload ? <span className="ml-2 rounded bg-moss-100 px-1.5 py-0.5 text-[10px] font-semibold uppercase tracking-wider text-moss-700">deload</span> : null}
-            </h3>
-            <span className="font-mono text-[11px] text-iron-400">
-              {DATE.format(new Date(`${s.date}T00:00:00Z`))} · {s.block} wk {s.week}
-            </span>
-          </header>
-          {s.warmupNotes.length > 0 ? <p className="border-b border-chalk-200 px-3 py-1.5 text-xs text-iron-500">Warm-up: {s.warmupNotes.join(" · ")}</p> : null}
-          <ol className="divide-y divide-chalk-200">
-            {s.exercises.map((ex, i) => (
-              <ExerciseRow key={i} ex={ex} units={s.units} variations={rotations?.get(ex.line)} onLine={onLine} />
-            ))}
-          </ol>
-        </section>
+        <SessionCard key={`${s.date}-${s.dayLine}`} s={s} variations={s.exercises.map((ex) => rotations?.get(ex.line))} onLine={onLine} />
       ))}
     </div>
   );
-}
+});
 
-function ExerciseRow({ ex, units, variations, onLine }: { ex: ExerciseOut; units: string; variations?: readonly string[]; onLine?: (line: number) => void }) {
+const SessionCard = memo(
+  function SessionCard({ s, variations, onLine }: { s: Session; variations: Variations; onLine?: OnLine }) {
+    // A week can hold dozens of days; the browser lays out and paints only those in view.
+    return (
+      <section className="rounded-lg border border-chalk-300 bg-white [contain-intrinsic-size:auto_24rem] [content-visibility:auto]" aria-label={`${s.day}, ${s.date}`}>
+        <header className="flex flex-wrap items-baseline justify-between gap-2 border-b border-chalk-200 px-3 py-2">
+          <h3 className="text-sm font-bold text-iron">
+            {s.day}
+            {s.deload ? <span className="ml-2 rounded bg-moss-100 px-1.5 py-0.5 text-[10px] font-semibold uppercase tracking-wider text-moss-700">deload</span> : null}
+          </h3>
+          <span className="font-mono text-[11px] text-iron-400">
+            {DATE.format(new Date(`${s.date}T00:00:00Z`))} · {s.block} wk {s.week}
+          </span>
+        </header>
+        {s.warmupNotes.length > 0 ? <p className="border-b border-chalk-200 px-3 py-1.5 text-xs text-iron-500">Warm-up: {s.warmupNotes.join(" · ")}</p> : null}
+        <ol className="divide-y divide-chalk-200">
+          {s.exercises.map((ex, i) => (
+            <ExerciseRow key={i} ex={ex} units={s.units} variations={variations[i]} onLine={onLine} />
+          ))}
+        </ol>
+      </section>
+    );
+  },
+  (a, b) => a.onLine === b.onLine && sameData(a.variations, b.variations) && sameData(a.s, b.s),
+);
+
+type RowProps = { ex: ExerciseOut; units: string; variations?: readonly string[]; onLine?: OnLine };
+
+const ExerciseRow = memo(function ExerciseRow({ ex, units, variations, onLine }: RowProps) {
   const warmups = ex.sets.filter((s) => s.kind === "warmup");
   const work = groupSets(ex.sets.filter((s) => s.kind === "work"));
   const extras = [ex.effort, ex.tempo ? `tempo ${ex.tempo}` : null, ex.pauseSeconds ? `pause ${ex.pauseSeconds} s` : null, ex.restSeconds ? `rest ${restText(ex.restSeconds)}` : null].filter(Boolean);
@@ -103,4 +124,8 @@ function ExerciseRow({ ex, units, variations, onLine }: { ex: ExerciseOut; units
       ) : null}
     </li>
   );
+}, sameRow);
+
+function sameRow(a: RowProps, b: RowProps): boolean {
+  return a.onLine === b.onLine && a.units === b.units && sameData(a.variations, b.variations) && sameData(a.ex, b.ex);
 }

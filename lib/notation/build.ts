@@ -13,6 +13,7 @@ import { BuildContext } from "./context";
 import { buildExercise, cueText, type NameUse } from "./exercise";
 import { applySetting, emptySettings } from "./meta";
 import type { Block, Day, Diagnostic, Programme, Weekday } from "./model";
+import type { LineCache, LineReport } from "./lineCache";
 import { firstErrorFrom, lineNodes } from "./lines";
 import { nearest } from "./suggest";
 import { reportSyntaxErrors } from "./syntax";
@@ -21,6 +22,8 @@ import { readDeloadWeek, readWeeks } from "./values";
 export interface BuildOptions {
   /** Names in the coach's exercise library; when given, other names get a warning. */
   knownExercises?: string[];
+  /** Lines read by the last build of the same document (an editor's); see {@link LineCache}. */
+  cache?: LineCache;
 }
 
 /** Name of the block that holds days written before any `block` line. */
@@ -67,6 +70,7 @@ function build(tree: Tree, source: string, options: BuildOptions = {}): { progra
     return d;
   };
 
+  options.cache?.begin();
   const nodes = lineNodes(tree, ctx.src);
   const broken: SyntaxNode[] = [];
   for (const node of nodes) {
@@ -96,7 +100,7 @@ function build(tree: Tree, source: string, options: BuildOptions = {}): { progra
         break;
       }
       case "Exercise": {
-        const ex = buildExercise(ctx, node, names);
+        const ex = options.cache ? cachedExercise(ctx, node, cutoff, names, options.cache) : buildExercise(ctx, node, names);
         if (ex) currentDay(node).exercises.push(ex);
         break;
       }
@@ -118,6 +122,32 @@ function build(tree: Tree, source: string, options: BuildOptions = {}): { progra
     title: settings.title, units: settings.units, round: settings.round, model: settings.model, meta: settings.meta, blocks,
   };
   return { programme, diagnostics: ctx.diagnostics };
+}
+
+/** An exercise line from the cache when nothing it depends on changed; read (and kept) otherwise. */
+function cachedExercise(ctx: BuildContext, node: SyntaxNode, cutoff: number, names: NameUse[], cache: LineCache) {
+  const base = node.from;
+  const line = ctx.line(node);
+  const hit = cache.get(node, ctx.src.text, line, cutoff);
+  if (hit) {
+    for (const r of hit.reports) ctx.report(base + r.from, base + r.to, r.severity, r.message);
+    for (const n of hit.names) names.push({ name: n.name, from: base + n.from, to: base + n.to });
+    return hit.exercise;
+  }
+  const reports: LineReport[] = [];
+  const firstName = names.length;
+  ctx.recording = reports;
+  try {
+    const exercise = buildExercise(ctx, node, names);
+    cache.set(node, ctx.src.text, line, cutoff, {
+      exercise,
+      names: names.slice(firstName).map((n) => ({ name: n.name, from: n.from - base, to: n.to - base })),
+      reports: reports.map((r) => ({ ...r, from: r.from - base, to: r.to - base })),
+    });
+    return exercise;
+  } finally {
+    ctx.recording = null;
+  }
 }
 
 /** Only spaces (as String.prototype.trim sees them) between the start of the node's line and the node. */
@@ -170,12 +200,25 @@ function nameKey(name: string): string {
   return name.toLowerCase().replace(/['’`]/g, "").replace(/[-_]+/g, " ").replace(/\s+/g, " ").trim();
 }
 
+/** The keys of the last library seen: an editor passes the same names on every keystroke. */
+let lastKnown: { names: string[]; keys: Set<string> } | null = null;
+
+function knownKeys(known: string[]): Set<string> {
+  // Compared by content, not identity, so a caller that changes its array in place is still right.
+  const same = lastKnown !== null && lastKnown.names.length === known.length && known.every((n, i) => n === lastKnown!.names[i]);
+  if (!same) lastKnown = { names: [...known], keys: new Set(known.map(nameKey)) };
+  return lastKnown!.keys;
+}
+
 function checkNames(ctx: BuildContext, names: NameUse[], known: string[]): void {
-  const set = new Set(known.map(nameKey));
-  // A name comes back on many lines; search the library once per spelling.
+  const set = knownKeys(known);
+  // A name comes back on many lines; key it and search the library once per spelling.
+  const isKnown = new Map<string, boolean>();
   const hints = new Map<string, string>();
   for (const n of names) {
-    if (set.has(nameKey(n.name))) continue;
+    let ok = isKnown.get(n.name);
+    if (ok === undefined) isKnown.set(n.name, (ok = set.has(nameKey(n.name))));
+    if (ok) continue;
     let hint = hints.get(n.name);
     if (hint === undefined) {
       const near = nearest(n.name, known);

@@ -54,7 +54,11 @@ export class BuildContext {
     return this.src.lineOf(node.from);
   }
 
+  /** When set, every report is also noted here as given (for the line cache). */
+  recording: { from: number; to: number; severity: Severity; message: string }[] | null = null;
+
   report(from: number, to: number, severity: Severity, message: string): void {
+    this.recording?.push({ from, to, severity, message });
     this.diagnostics.push(this.src.diagnostic(from, to, severity, message));
   }
 

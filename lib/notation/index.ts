@@ -17,6 +17,8 @@ export { formatProgramme } from "./format";
 export type { BuildOptions as ParseOptions } from "./build";
 /** Model and diagnostics from a tree already at hand (an editor's incrementally parsed tree). */
 export { buildProgramme } from "./build";
+/** Lines kept between builds of the same document, so an editor reads again only what changed. */
+export { LineCache } from "./lineCache";
 
 /** The Lezer syntax tree of a source text (error nodes mark what could not be read). */
 export function parseTree(source: string): Tree {

@@ -1,3 +1,4 @@
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { didYouMean, editDistance, nearest } from "./suggest";
 
@@ -23,6 +24,25 @@ describe("nearest", () => {
   });
   it("orders exercise names by closeness", () => {
     expect(nearest("bench pres", ["back squat", "bench press", "bench dip"])).toEqual(["bench press"]);
+  });
+  // Levenshtein distance is never less than the difference in length (each extra character costs
+  // one insertion or deletion; textbook property), so nearest may skip such names unmeasured.
+  it("finds what measuring every candidate in full finds", () => {
+    const word = fc.string({ unit: fc.constantFrom("a", "b", "c", " ", "-"), maxLength: 12 });
+    fc.assert(
+      fc.property(word, fc.array(word, { maxLength: 12 }), (w, names) => {
+        for (const n of names) expect(editDistance(w, n)).toBeGreaterThanOrEqual(Math.abs(w.length - n.length));
+        const budget = Math.max(2, Math.floor(w.length / 3));
+        const full = names
+          .map((c) => ({ c, d: editDistance(w.toLowerCase(), c.toLowerCase()) }))
+          .filter((x) => x.d <= budget)
+          .sort((x, y) => x.d - y.d || x.c.localeCompare(y.c))
+          .slice(0, 3)
+          .map((x) => x.c);
+        expect(nearest(w, names)).toEqual(full);
+      }),
+      { numRuns: 500 },
+    );
   });
 });
 

@@ -31,9 +31,15 @@ export function editDistance(a: string, b: string): number {
 export function nearest(word: string, candidates: readonly string[], limit = 3): string[] {
   const w = word.toLowerCase();
   const budget = Math.max(2, Math.floor(w.length / 3));
-  return candidates
-    .map((c) => ({ c, d: editDistance(w, c.toLowerCase()) }))
-    .filter((x) => x.d <= budget)
+  const close: { c: string; d: number }[] = [];
+  for (const c of candidates) {
+    const low = c.toLowerCase();
+    // The distance is at least the difference in length: skip the table for names that far apart.
+    if (Math.abs(low.length - w.length) > budget) continue;
+    const d = editDistance(w, low);
+    if (d <= budget) close.push({ c, d });
+  }
+  return close
     .sort((x, y) => x.d - y.d || x.c.localeCompare(y.c))
     .slice(0, limit)
     .map((x) => x.c);
