@@ -36,6 +36,37 @@ export type CatalogueItem = {
 
 export type CataloguePage = { items: CatalogueItem[]; total: number; page: number; pageSize: number; tags: string[] };
 
+type CardRow = {
+  id: string;
+  slug: string;
+  title: string;
+  summary: string;
+  tags: string[];
+  coach_name: string;
+  price_minor: number;
+  currency: CatalogueItem["currency"];
+  level: CatalogueItem["level"];
+  weeks: number;
+  days_per_week: number;
+};
+
+/** The card fields shared by the catalogue list and a listing page. */
+function toCatalogueItem(r: CardRow): CatalogueItem {
+  return {
+    id: r.id,
+    slug: r.slug,
+    title: r.title,
+    summary: r.summary,
+    tags: r.tags,
+    coachName: r.coach_name,
+    priceMinor: r.price_minor,
+    currency: r.currency,
+    level: r.level,
+    weeks: r.weeks,
+    daysPerWeek: r.days_per_week,
+  };
+}
+
 function likePattern(text: string): string {
   return `%${text.toLowerCase().replace(/[\\%_]/g, "\\$&")}%`;
 }
@@ -89,19 +120,7 @@ export async function listCatalogue(db: Db, filters: CatalogueFilters = {}): Pro
       .execute(),
   ]);
   return {
-    items: rows.map((r) => ({
-      id: r.id,
-      slug: r.slug,
-      title: r.title,
-      summary: r.summary,
-      tags: r.tags,
-      coachName: r.coach_name,
-      priceMinor: r.price_minor,
-      currency: r.currency,
-      level: r.level,
-      weeks: r.weeks,
-      daysPerWeek: r.days_per_week,
-    })),
+    items: rows.map(toCatalogueItem),
     total: Number(count.n),
     page,
     pageSize,
@@ -159,17 +178,7 @@ export async function getListingPage(db: Db, slug: string, viewer: { id: string;
   const privileged = viewer !== null && (viewer.role === "admin" || viewer.id === r.seller_id);
   if (!onSale && !privileged) return null;
   return {
-    id: r.id,
-    slug: r.slug,
-    title: r.title,
-    summary: r.summary,
-    tags: r.tags,
-    coachName: r.coach_name,
-    priceMinor: r.price_minor,
-    currency: r.currency,
-    level: r.level,
-    weeks: r.weeks,
-    daysPerWeek: r.days_per_week,
+    ...toCatalogueItem(r),
     versionId: r.version_id,
     versionNumber: r.version_number,
     programme: readModel(r.model, r.source),
