@@ -45,3 +45,25 @@ export async function requireAthleteFor(db: Db, actor: Actor, athleteId: string)
   if (!found) throw athleteNotFound();
   return found;
 }
+
+export type RosterEntry = { id: string; name: string; email: string };
+
+/**
+ * The athletes a coach looks after, by name; accounts an admin disabled are
+ * left out, as everywhere else. Only a coach has a roster.
+ *
+ * @example
+ * await listRoster(db, { id: coachId, role: "coach" }); // [{ id, name: "Lena Okafor", email }, …]
+ */
+export async function listRoster(db: Db, actor: Actor): Promise<RosterEntry[]> {
+  if (actor.role !== "coach") throw new DomainError("forbidden", "Only a coach has athletes.");
+  return db
+    .selectFrom("users")
+    .select(["id", "name", "email"])
+    .where("coach_id", "=", actor.id)
+    .where("role", "=", "athlete")
+    .where("disabled_at", "is", null)
+    .orderBy("name")
+    .orderBy("id")
+    .execute();
+}

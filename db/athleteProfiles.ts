@@ -1,7 +1,7 @@
 import "server-only";
 import type { AthleteProfile } from "../lib/athlete/profile";
 import { defaultPresetFor } from "../lib/athlete/presets";
-import { convertMass } from "../lib/load/units";
+import { toExpansionProfile } from "../lib/athlete/expansion";
 import type { MaxKind, MaxSource, PlateSet, Units } from "./database";
 import { type Actor, type Db, requireAthleteFor } from "./athleteAccess";
 
@@ -67,9 +67,8 @@ export async function currentMaxes(db: Db, athleteId: string): Promise<CurrentMa
 }
 
 /**
- * The profile lib/load expands with: equipment plus current maxes, each in the
- * athlete's unit. A training max is used as given — percentages then apply to
- * it, which is what a coach who enters one intends.
+ * The profile lib/load expands with (lib/athlete/expansion.ts), for an athlete
+ * whose access the caller has checked.
  *
  * @example
  * const profile = await expansionProfile(db, athlete.id, athlete.name);
@@ -77,18 +76,7 @@ export async function currentMaxes(db: Db, athleteId: string): Promise<CurrentMa
  */
 export async function expansionProfile(db: Db, athleteId: string, name: string): Promise<AthleteProfile> {
   const [eq, maxes] = await Promise.all([getEquipment(db, athleteId), currentMaxes(db, athleteId)]);
-  const byName: Record<string, number> = {};
-  for (const m of maxes) byName[m.exercise] = m.units === eq.units ? m.value : Math.round(convertMass(m.value, m.units, eq.units) * 100) / 100;
-  return {
-    name,
-    units: eq.units,
-    bar: eq.bar,
-    plates: eq.plates,
-    dumbbellStep: eq.dumbbellStep,
-    machineStep: eq.machineStep,
-    maxes: byName,
-    ...(eq.bodyweight !== null ? { bodyweight: eq.bodyweight } : {}),
-  };
+  return toExpansionProfile(name, eq, maxes);
 }
 
 export type AthleteOverview = { athlete: { id: string; name: string; email: string }; equipment: Equipment; maxes: CurrentMax[] };

@@ -20,6 +20,7 @@ import { IqEditor, type IqEditorHandle } from "./IqEditor";
 import { ProblemList, type Problem } from "./ProblemList";
 import { PreviewAthletePanel } from "./PreviewAthletePanel";
 import { useLocalDraft } from "./useLocalDraft";
+import { usePreviewAthlete } from "./usePreviewAthlete";
 import { useSameData } from "./useSameData";
 import { nextMonday, SAMPLE_MAXES_KG, sampleProfile } from "./sampleProfile";
 
@@ -65,7 +66,10 @@ export function Workbench({ draftKey, initialText, libraryNames = [], onSave, on
   const programme = useSameData(parsed.programme);
   const totalWeeks = Math.max(1, programme.blocks.reduce((s, b) => s + b.weeks, 0));
   const shownWeek = Math.min(week, totalWeeks);
-  const profile = useMemo(() => sampleProfile(units, maxes), [units, maxes]);
+  const previewAthlete = usePreviewAthlete();
+  const sample = useMemo(() => sampleProfile(units, maxes), [units, maxes]);
+  // While a chosen athlete loads, the preview keeps showing the sample rather than going blank.
+  const profile = previewAthlete.profile ?? sample;
   const expansion = useMemo(() => expandProgramme(programme, profile, { start, weeks: shownWeek }), [programme, profile, start, shownWeek]);
   const sessions = useMemo(() => expansion.sessions.filter((s) => s.weekInProgramme === shownWeek), [expansion, shownWeek]);
   const rotations = useMemo(() => {
@@ -198,7 +202,7 @@ export function Workbench({ draftKey, initialText, libraryNames = [], onSave, on
             <button type="button" className="btn-quiet px-2.5 py-1.5" onClick={() => setWeek(Math.min(totalWeeks, shownWeek + 1))} disabled={shownWeek >= totalWeeks} aria-label="Next week">›</button>
           </div>
         </div>
-        <PreviewAthletePanel units={units} onUnits={switchUnits} maxes={maxes} onMaxes={setMaxes} names={usedNames} />
+        <PreviewAthletePanel athlete={previewAthlete} units={units} onUnits={switchUnits} maxes={maxes} onMaxes={setMaxes} names={usedNames} />
         <div className="lg:max-h-[calc(100dvh-22rem)] lg:overflow-y-auto">
           <WeekPreview sessions={sessions} rotations={rotations} onLine={jumpToLine} />
         </div>

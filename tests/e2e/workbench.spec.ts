@@ -115,3 +115,35 @@ test("the template API answers bad input with a clear message, never a 500", asy
   const b = await broken.json();
   expect(b.error.diagnostics[0]).toMatchObject({ line: 2 });
 });
+
+test("the preview works loads for one of the coach's athletes, from their own gym and maxes", async ({ page }) => {
+  await signIn(page, "coach@larchmere.test");
+  await page.goto("/coach/templates/new");
+  await replaceText(page, "title: Athlete check\nunits: kg\nblock Base 1w\nday Heavy mon\n  back squat 1x5 @80%\n  overhead press 1x5 @80%");
+  const squat = page.getByTestId("preview-load").first();
+  // Sample athlete: back squat 1RM 140 kg → 80 % = 112 kg → 112.5 kg, the nearest load in 2.5 kg steps (common practice, no source).
+  await expect(squat).toHaveText("112.5 kg");
+
+  // The demo's Maya trains in pounds in a garage gym, back squat 1RM 225 lb: 80 % = 180 lb, loads in her unit.
+  const picker = page.getByLabel("Preview for");
+  await picker.selectOption({ label: "Maya Okonjo" });
+  await expect(squat).toHaveText("180 lb");
+  await expect(page.getByTestId("preview-gym")).toHaveText("lb · 45 lb bar");
+  // She has no overhead press max on file, so that load stays empty and the panel says so.
+  await expect(page.getByTestId("preview-missing")).toContainText("overhead press");
+  await page.getByRole("button", { name: "Show maxes" }).click();
+  await expect(page.getByText("225 lb")).toBeVisible();
+  await expect(page.getByRole("link", { name: "Change Maya’s maxes" })).toHaveAttribute("href", /\/coach\/athletes\/[0-9a-f-]{36}$/);
+
+  // Lena, back squat 1RM 85 kg at a home rack with 1.25 kg change plates: 80 % = 68 kg → 67.5 kg.
+  await picker.selectOption({ label: "Lena Fisk" });
+  await expect(squat).toHaveText("67.5 kg");
+
+  // The choice is kept on this device; going back to the sample restores its maxes.
+  await page.reload();
+  await page.getByRole("button", { name: "Bring it back" }).click();
+  await expect(page.getByLabel("Preview for").locator("option:checked")).toHaveText("Lena Fisk");
+  await expect(page.getByTestId("preview-load").first()).toHaveText("67.5 kg");
+  await page.getByLabel("Preview for").selectOption({ label: "Sample athlete" });
+  await expect(page.getByTestId("preview-load").first()).toHaveText("112.5 kg");
+});

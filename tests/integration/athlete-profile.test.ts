@@ -18,6 +18,7 @@ const h = vi.hoisted(() => ({
 vi.mock("@/server/auth", () => ({ getViewer: async () => h.viewer }));
 vi.mock("@/db/client", async (importOriginal) => ({ ...(await importOriginal<object>()), getDb: () => h.db }));
 
+const roster = await import("../../app/api/athletes/route");
 const overview = await import("../../app/api/athletes/[id]/route");
 const equipment = await import("../../app/api/athletes/[id]/equipment/route");
 const maxes = await import("../../app/api/athletes/[id]/maxes/route");
@@ -88,6 +89,22 @@ describe("athlete profile through the route handlers", () => {
     expect((await equipment.PUT(request("PUT", "", KG_CLUB), params({ id: tomas.id }))).status).toBe(404);
     expect((await csv.POST(csvText("apply", "exercise,value,unit,date\nsquat,100,kg,2026-01-01\n"), params({ id: tomas.id }))).status).toBe(404);
     expect(await countMaxes(tomas.id)).toBe(0);
+  });
+
+  it("lists only the coach's own athletes, by name, without disabled accounts", async () => {
+    const names = async (viewer: Person | null) => {
+      h.viewer = viewer;
+      const res = await roster.GET();
+      return { status: res.status, body: await res.json() };
+    };
+    expect(await names(coach)).toEqual({ status: 200, body: { athletes: [{ id: maya.id, name: "Maya Okonjo", email: "maya@larchmere.test" }, { id: tomas.id, name: "Tomas Brenner", email: "tomas@larchmere.test" }] } });
+    expect((await names(otherCoach)).body.athletes.map((a: { name: string }) => a.name)).toEqual(["Lena Fisk"]);
+    const gone = await addPerson(scratch.db, "gone@larchmere.test", "Ada Gone", "athlete", coach.id);
+    await scratch.db.updateTable("users").set({ disabled_at: new Date() }).where("id", "=", gone.id).execute();
+    expect((await names(coach)).body.athletes).toHaveLength(2);
+    expect((await names(tomas)).status).toBe(403);
+    expect((await names(admin)).status).toBe(403);
+    expect((await names(null)).status).toBe(401);
   });
 
   it("saves equipment for the athlete or the coach and names each bad field with a 422", async () => {

@@ -5,6 +5,7 @@
  * `ApiError` (app/api/templates/types.ts).
  */
 import type { MaxEntry as StoredMaxEntry, MaxesView } from "@/db/athleteMaxes";
+import type { RosterEntry } from "@/db/athleteAccess";
 import type { AthleteOverview, CurrentMax, Equipment } from "@/db/athleteProfiles";
 import type { CsvResult } from "@/lib/athlete/maxesCsv";
 import type { AsJson } from "../json";
@@ -15,6 +16,9 @@ export type { MaxField as CsvField } from "@/lib/athlete/maxEntry";
 export type { CsvProblem, CsvRow } from "@/lib/athlete/maxesCsv";
 
 export type MaxEntry = AsJson<StoredMaxEntry>;
+
+/** GET /api/athletes — the coach's athletes, by name. */
+export type RosterResponse = { athletes: RosterEntry[] };
 
 /** GET /api/athletes/[id] */
 export type AthleteResponse = AthleteOverview;
