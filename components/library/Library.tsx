@@ -2,8 +2,9 @@
 import { keepPreviousData, useQuery, useQueryClient } from "@tanstack/react-query";
 import { createColumnHelper, flexRender, getCoreRowModel, type SortingState, useReactTable } from "@tanstack/react-table";
 import { usePathname, useRouter } from "next/navigation";
-import { useCallback, useEffect, useMemo, useState } from "react";
+import { useCallback, useMemo, useState } from "react";
 import type { ExerciseResponse, LibraryEntry, LibraryResponse } from "@/app/api/exercises/types";
+import { Pager, pageCount, usePagedSearch } from "../Pager";
 import { api } from "@/components/templates/api";
 import { ExerciseEditor } from "./ExerciseEditor";
 import { ExerciseForm } from "./ExerciseForm";
@@ -37,21 +38,12 @@ export function Library({ initial, addName }: { initial: LibraryResponse; addNam
   const router = useRouter();
   const pathname = usePathname();
   const client = useQueryClient();
-  const [q, setQ] = useState("");
-  const [debounced, setDebounced] = useState("");
-  const [page, setPage] = useState(1);
+  const { q, setQ, debounced, page, setPage } = usePagedSearch();
   const [sorting, setSorting] = useState<SortingState>([{ id: "name", desc: false }]);
   const [adding, setAdding] = useState<string | null>(addName);
   const [editing, setEditing] = useState<LibraryEntry | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
 
-  useEffect(() => {
-    const t = setTimeout(() => {
-      setDebounced(q.trim());
-      setPage(1);
-    }, 250);
-    return () => clearTimeout(t);
-  }, [q]);
 
   const sort = sorting[0] ?? { id: "name", desc: false };
   const isFirst = debounced === "" && page === 1 && sort.id === "name" && !sort.desc;
@@ -63,7 +55,7 @@ export function Library({ initial, addName }: { initial: LibraryResponse; addNam
     placeholderData: keepPreviousData,
   });
   const data = query.data;
-  const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
+  const pages = pageCount(data);
   const groups = useMemo(() => [...new Set((data?.items ?? []).map((e) => e.substitutionGroup).filter((g): g is string => !!g))].sort(), [data]);
 
   const refresh = useCallback(() => client.invalidateQueries({ queryKey: ["library"] }), [client]);
@@ -219,13 +211,7 @@ export function Library({ initial, addName }: { initial: LibraryResponse; addNam
             </ul>
           </>
         )}
-        {pages > 1 ? (
-          <div className="flex items-center justify-end gap-2 border-t border-chalk-200 px-4 py-2 text-sm">
-            <button type="button" className="btn-quiet px-3 py-1.5" disabled={page <= 1} onClick={() => setPage(page - 1)}>Previous</button>
-            <span>Page {page} of {pages}</span>
-            <button type="button" className="btn-quiet px-3 py-1.5" disabled={page >= pages} onClick={() => setPage(page + 1)}>Next</button>
-          </div>
-        ) : null}
+        <Pager page={page} pages={pages} onPage={setPage} />
       </div>
 
       {adding !== null ? (

@@ -1,8 +1,8 @@
 "use client";
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import Link from "next/link";
-import { useEffect, useState } from "react";
 import type { TemplateListResponse } from "@/app/api/templates/types";
+import { Pager, pageCount, usePagedSearch } from "../Pager";
 import { api } from "./api";
 
 const PAGE_SIZE = 20;
@@ -10,16 +10,7 @@ const WHEN = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", 
 
 /** The coach's templates: search by title or tag, page through, open one. */
 export function TemplateList({ initial }: { initial: TemplateListResponse }) {
-  const [q, setQ] = useState("");
-  const [debounced, setDebounced] = useState("");
-  const [page, setPage] = useState(1);
-  useEffect(() => {
-    const t = setTimeout(() => {
-      setDebounced(q.trim());
-      setPage(1);
-    }, 250);
-    return () => clearTimeout(t);
-  }, [q]);
+  const { q, setQ, debounced, page, setPage } = usePagedSearch();
 
   const query = useQuery({
     queryKey: ["templates", debounced, page],
@@ -28,7 +19,7 @@ export function TemplateList({ initial }: { initial: TemplateListResponse }) {
     placeholderData: keepPreviousData,
   });
   const data = query.data;
-  const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
+  const pages = pageCount(data);
 
   return (
     <div className="panel">
@@ -65,13 +56,7 @@ export function TemplateList({ initial }: { initial: TemplateListResponse }) {
           ))}
         </ul>
       )}
-      {pages > 1 ? (
-        <div className="flex items-center justify-end gap-2 border-t border-chalk-200 px-4 py-2 text-sm">
-          <button type="button" className="btn-quiet px-3 py-1.5" disabled={page <= 1} onClick={() => setPage(page - 1)}>Previous</button>
-          <span>Page {page} of {pages}</span>
-          <button type="button" className="btn-quiet px-3 py-1.5" disabled={page >= pages} onClick={() => setPage(page + 1)}>Next</button>
-        </div>
-      ) : null}
+      <Pager page={page} pages={pages} onPage={setPage} />
     </div>
   );
 }
