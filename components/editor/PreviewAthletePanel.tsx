@@ -1,6 +1,6 @@
 "use client";
 import Link from "next/link";
-import { useMemo, useState } from "react";
+import { memo, useMemo, useState } from "react";
 import { exerciseKey } from "@/lib/exercises/resolve";
 import type { PreviewAthlete } from "./usePreviewAthlete";
 
@@ -11,7 +11,7 @@ type Units = "kg" | "lb";
  * edited in place, or one of the coach's athletes, shown with their own gym
  * and current maxes (changed on the athlete's page, not here).
  */
-export function PreviewAthletePanel(props: {
+export const PreviewAthletePanel = memo(function PreviewAthletePanel(props: {
   athlete: PreviewAthlete;
   units: Units;
   onUnits(u: Units): void;
@@ -91,7 +91,7 @@ export function PreviewAthletePanel(props: {
       ) : null}
     </div>
   );
-}
+});
 
 function SampleMaxes(props: { rows: string[]; units: Units; maxes: Record<string, number>; onMaxes(m: Record<string, number>): void }) {
   return (

@@ -147,13 +147,13 @@ export function Workbench({ draftKey, initialText, libraryNames = [], onSave, on
   }, [onSave, localDraft]);
 
   // Same athlete in the other unit: 1 lb = 0.45359237 kg, maxes to the nearest 2.5 kg / 5 lb.
-  function switchUnits(next: "kg" | "lb") {
+  const switchUnits = useCallback((next: "kg" | "lb") => {
     if (next === units) return;
     const factor = next === "lb" ? 1 / 0.45359237 : 0.45359237;
     const step = next === "lb" ? 5 : 2.5;
-    setMaxes(Object.fromEntries(Object.entries(maxes).map(([k, v]) => [k, Math.round((v * factor) / step) * step])));
+    setMaxes((m) => Object.fromEntries(Object.entries(m).map(([k, v]) => [k, Math.round((v * factor) / step) * step])));
     setUnits(next);
-  }
+  }, [units]);
 
   function restoreLocal() {
     try {

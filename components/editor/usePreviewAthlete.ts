@@ -70,12 +70,8 @@ export function usePreviewAthlete(): PreviewAthlete {
     : chosenId !== null && athlete.isError ? "That athlete's maxes could not be loaded; the preview uses the sample athlete."
     : null;
 
-  return {
-    roster: useMemo(() => (list ?? []).map((a) => ({ id: a.id, name: a.name })), [list]),
-    chosenId,
-    choose,
-    profile,
-    loading: chosenId !== null && athlete.isPending,
-    problem,
-  };
+  const rosterList = useMemo(() => (list ?? []).map((a) => ({ id: a.id, name: a.name })), [list]);
+  const loading = chosenId !== null && athlete.isPending;
+  // One object while nothing changed, so the memoised panel skips keystrokes.
+  return useMemo(() => ({ roster: rosterList, chosenId, choose, profile, loading, problem }), [rosterList, chosenId, choose, profile, loading, problem]);
 }
