@@ -5,6 +5,7 @@ import { parseEquipment } from "../lib/athlete/equipment";
 import { exerciseMatcher, type ExerciseResolver } from "../lib/athlete/exerciseMatch";
 import { type CheckedMax, checkMax, MAX_FIELDS, type MaxDraft, type MaxRules } from "../lib/athlete/maxEntry";
 import { type CsvResult, describeCsvProblem, parseMaxesCsv } from "../lib/athlete/maxesCsv";
+import { maxIdentity, repeatedLines } from "../lib/athlete/maxRepeats";
 import { matchingPreset } from "../lib/athlete/presets";
 import { type Actor, type Db, requireAthleteFor } from "./athleteAccess";
 import { type CurrentMax, currentMaxes, type Equipment, getEquipment } from "./athleteProfiles";
@@ -133,10 +134,20 @@ export async function deleteMax(db: Db, actor: Actor, athleteId: string, maxId: 
   });
 }
 
-/** Checks a CSV file of maxes row by row; writes nothing. */
-export async function previewMaxesCsv(db: Db, actor: Actor, athleteId: string, text: string): Promise<CsvResult> {
+/** Identities (lib/athlete/maxRepeats.ts) of every max the athlete has on file. */
+async function storedIdentities(db: Db, athleteId: string): Promise<Set<string>> {
+  const rows = await db.selectFrom("athlete_maxes").select(["exercise_key", "measured_on", "kind", "value", "units"]).where("athlete_id", "=", athleteId).execute();
+  return new Set(rows.map((r) => maxIdentity({ exerciseKey: r.exercise_key, date: r.measured_on, kind: r.kind, value: r.value, unit: r.units })));
+}
+
+/**
+ * Checks a CSV file of maxes row by row; writes nothing. `repeats` are the
+ * lines already on file (or given twice), which adding will skip.
+ */
+export async function previewMaxesCsv(db: Db, actor: Actor, athleteId: string, text: string): Promise<CsvResult & { repeats: number[] }> {
   const athlete = await requireAthleteFor(db, actor, athleteId);
-  return parseMaxesCsv(text, await exerciseResolverFor(db, athlete.id), maxRules());
+  const result = parseMaxesCsv(text, await exerciseResolverFor(db, athlete.id), maxRules());
+  return { ...result, repeats: repeatedLines(result.rows, await storedIdentities(db, athlete.id)) };
 }
 
 /** Up to this many problems are named in an apply that was refused; the preview lists them all. */
@@ -145,9 +156,10 @@ const PROBLEMS_LISTED = 50;
 /**
  * Checks the file again and adds every row in one transaction, or none: any
  * problem refuses the whole file with the problems keyed `rows.<line>.<column>`
- * (`file` for the file as a whole).
+ * (`file` for the file as a whole). Rows already on file are skipped, so the
+ * same file uploaded twice adds nothing the second time.
  */
-export async function applyMaxesCsv(db: Db, actor: Actor, athleteId: string, text: string): Promise<{ added: number; recomputed: number }> {
+export async function applyMaxesCsv(db: Db, actor: Actor, athleteId: string, text: string): Promise<{ added: number; skipped: number; recomputed: number }> {
   return inTransaction(db, async (trx) => {
     const athlete = await requireAthleteFor(trx, actor, athleteId);
     const result = parseMaxesCsv(text, await exerciseResolverFor(trx, athlete.id), maxRules());
@@ -166,10 +178,12 @@ export async function applyMaxesCsv(db: Db, actor: Actor, athleteId: string, tex
       );
     }
     await lockAthlete(trx, athlete.id);
-    const rows = result.rows.map((r) => maxRow(athlete.id, actor, r.max as CheckedMax));
+    const repeats = new Set(repeatedLines(result.rows, await storedIdentities(trx, athlete.id)));
+    const rows = result.rows.filter((r) => !repeats.has(r.line)).map((r) => maxRow(athlete.id, actor, r.max as CheckedMax));
+    if (rows.length === 0) return { added: 0, skipped: repeats.size, recomputed: 0 };
     await trx.insertInto("athlete_maxes").values(rows).execute();
     const { updated } = await recomputeFutureSessions(trx, athlete.id);
-    return { added: rows.length, recomputed: updated };
+    return { added: rows.length, skipped: repeats.size, recomputed: updated };
   });
 }
 

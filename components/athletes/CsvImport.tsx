@@ -58,7 +58,8 @@ export function CsvImport({ athleteId }: { athleteId: string }) {
     setApplyProblems([]);
     try {
       const res = await post<CsvApplyResponse>("apply", file);
-      setMessage({ tone: "ok", text: `Added ${res.added} max${res.added === 1 ? "" : "es"}. ${recomputedText(res.recomputed)}` });
+      const skipped = res.skipped ? ` ${res.skipped} already on file ${res.skipped === 1 ? "was" : "were"} left as they were.` : "";
+      setMessage({ tone: "ok", text: res.added === 0 ? `Nothing new to add: every max in the file is already on file.` : `Added ${res.added} max${res.added === 1 ? "" : "es"}.${skipped} ${recomputedText(res.recomputed)}` });
       reset(false);
       await client.invalidateQueries({ queryKey: maxesKey(athleteId) });
     } catch (e) {
@@ -77,7 +78,9 @@ export function CsvImport({ athleteId }: { athleteId: string }) {
   }
 
   const bad = preview ? preview.rows.filter((r) => r.problems.length > 0).length : 0;
-  const canApply = !!preview && preview.ok && busy === null;
+  const repeats = new Set(preview?.repeats ?? []);
+  const fresh = preview ? preview.rows.length - repeats.size : 0;
+  const canApply = !!preview && preview.ok && fresh > 0 && busy === null;
 
   return (
     <div className="space-y-4 text-sm">
@@ -124,12 +127,13 @@ export function CsvImport({ athleteId }: { athleteId: string }) {
           <p className="font-medium text-iron-700" aria-live="polite">
             {preview.rows.length} row{preview.rows.length === 1 ? "" : "s"} read
             {bad > 0 || preview.fileProblems.length > 0 ? ` — ${preview.problems.length} problem${preview.problems.length === 1 ? "" : "s"}; fix the file and choose it again.` : " — all good."}
+            {repeats.size > 0 ? ` ${repeats.size} ${repeats.size === 1 ? "is" : "are"} already on file and will be left out.` : ""}
           </p>
           <ProblemList problems={preview.problems} />
-          {preview.rows.length ? <PreviewTable rows={preview.rows} /> : null}
+          {preview.rows.length ? <PreviewTable rows={preview.rows} repeats={repeats} /> : null}
           <div className="flex flex-wrap items-center gap-3">
             <button type="button" className="btn-primary" disabled={!canApply} onClick={apply}>
-              {busy === "apply" ? "Adding…" : `Add ${preview.rows.length} max${preview.rows.length === 1 ? "" : "es"}`}
+              {busy === "apply" ? "Adding…" : `Add ${fresh} max${fresh === 1 ? "" : "es"}`}
             </button>
             <button type="button" className="btn-quiet" disabled={busy !== null} onClick={() => reset()}>Cancel</button>
             {!preview.ok ? <span className="text-iron-500">Adding is off until every row is right.</span> : null}
@@ -140,7 +144,7 @@ export function CsvImport({ athleteId }: { athleteId: string }) {
   );
 }
 
-function PreviewTable({ rows }: { rows: CsvRow[] }) {
+function PreviewTable({ rows, repeats }: { rows: CsvRow[]; repeats: ReadonlySet<number> }) {
   return (
     <div className="max-h-[28rem] overflow-auto rounded-md border border-chalk-200">
       <table className="w-full min-w-[40rem] text-left text-xs">
@@ -157,8 +161,16 @@ function PreviewTable({ rows }: { rows: CsvRow[] }) {
           {rows.map((r) => {
             const badFields = new Set(r.problems.map((p) => p.field));
             return (
-              <tr key={r.line} className={r.problems.length ? "bg-ember-50" : ""} data-problem={r.problems.length ? "true" : undefined}>
-                <td className="px-2 py-1.5 align-top tabular-nums text-iron-500">{r.line}</td>
+              <tr
+                key={r.line}
+                className={r.problems.length ? "bg-ember-50" : repeats.has(r.line) ? "text-iron-400" : ""}
+                data-problem={r.problems.length ? "true" : undefined}
+                data-repeat={repeats.has(r.line) ? "true" : undefined}
+              >
+                <td className="px-2 py-1.5 align-top tabular-nums text-iron-500">
+                  {r.line}
+                  {repeats.has(r.line) ? <span className="ml-1 whitespace-nowrap rounded bg-chalk-200 px-1 text-[10px] uppercase tracking-wide">on file</span> : null}
+                </td>
                 {COLUMNS.map((c) => (
                   <td key={c} className={`px-2 py-1.5 align-top ${badFields.has(c) ? "font-semibold text-ember-700 underline decoration-wavy" : ""}`}>
                     {c === "exercise" && r.max && r.max.exercise.toLowerCase() !== (r.cells.exercise ?? "").trim().toLowerCase() ? (

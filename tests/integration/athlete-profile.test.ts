@@ -204,8 +204,18 @@ describe("athlete profile through the route handlers", () => {
     const good = bad.replace(addDays(todayUtc(), 30), daysAgo(5));
     const applied = await csv.POST(csvText("apply", good), params({ id: tomas.id }));
     expect(applied.status).toBe(200);
-    expect(await applied.json()).toEqual({ mode: "apply", added: 3, recomputed: 0 });
+    expect(await applied.json()).toEqual({ mode: "apply", added: 3, skipped: 0, recomputed: 0 });
     expect(await countMaxes(tomas.id)).toBe(before + 3);
+
+    // The same file again: the preview names every line as already on file, and adding writes nothing.
+    const again = await (await csv.POST(csvText("preview", good), params({ id: tomas.id }))).json();
+    expect(again).toMatchObject({ ok: true, repeats: [2, 3, 4] });
+    expect(await (await csv.POST(csvText("apply", good), params({ id: tomas.id }))).json()).toEqual({ mode: "apply", added: 0, skipped: 3, recomputed: 0 });
+    // One new line among old ones, and a line given twice: only the new max is added, once.
+    const more = `${good}squat,150,kg,${daysAgo(2)}\nsquat,150.0,kg,${daysAgo(2)}\n`;
+    expect((await (await csv.POST(csvText("preview", more), params({ id: tomas.id }))).json()).repeats).toEqual([2, 3, 4, 6]);
+    expect(await (await csv.POST(csvText("apply", more), params({ id: tomas.id }))).json()).toMatchObject({ added: 1, skipped: 4 });
+    expect(await countMaxes(tomas.id)).toBe(before + 4);
   });
 
   it("refuses a CSV request it cannot read with a message, never a 500", async () => {

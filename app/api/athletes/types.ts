@@ -37,7 +37,7 @@ export type AddMaxBody = { exercise: string; value: number | string; unit: strin
 /** DELETE /api/athletes/[id]/maxes/[maxId] */
 export type DeleteMaxResponse = { deleted: true; recomputed: number };
 
-/** POST /api/athletes/[id]/maxes/csv?mode=preview — nothing written. */
-export type CsvPreviewResponse = { mode: "preview" } & CsvResult;
+/** POST /api/athletes/[id]/maxes/csv?mode=preview — nothing written; `repeats`: lines already on file, which apply skips. */
+export type CsvPreviewResponse = { mode: "preview"; repeats: number[] } & CsvResult;
 /** POST /api/athletes/[id]/maxes/csv?mode=apply — every row added, or a 422 naming `rows.<line>.<column>`. */
-export type CsvApplyResponse = { mode: "apply"; added: number; recomputed: number };
+export type CsvApplyResponse = { mode: "apply"; added: number; skipped: number; recomputed: number };
