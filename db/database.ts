@@ -27,6 +27,8 @@ export interface UsersTable {
   coach_id: string | null;
   gym_id: string | null;
   disabled_at: Date | null;
+  /** Last password change; sessions signed in before it no longer count. */
+  credentials_changed_at: Date | null;
   created_at: CreatedAt;
 }
 

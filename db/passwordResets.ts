@@ -99,7 +99,8 @@ export async function completePasswordReset(db: Db, token: string, passwordHash:
     }
     const user = await trx
       .updateTable("users")
-      .set({ password_hash: passwordHash })
+      // Sessions are signed tokens held by browsers; this is what ends the ones already out.
+      .set({ password_hash: passwordHash, credentials_changed_at: new Date() })
       .where("id", "=", reset.user_id)
       .where("disabled_at", "is", null)
       .returning("email")

@@ -17,6 +17,30 @@ export async function findUserForSignIn(db: Db, email: string): Promise<SignInRe
   return { id: row.id, email: row.email, name: row.name, role: row.role, passwordHash: row.password_hash, disabled: row.disabled_at !== null };
 }
 
+export type SessionViewer = { id: string; email: string; name: string; role: Role };
+
+/**
+ * The person behind a signed session, read fresh: null when the account is
+ * gone or disabled, or when its password changed after this session signed
+ * in (`signedInAt`, ms since the epoch; null for a session from before that
+ * was recorded). Name and role come from the account, not the token, so an
+ * admin's change applies at once.
+ *
+ * @example
+ * await viewerForSession(db, { id, signedInAt: Date.now() }); // { id, email, name, role } | null
+ */
+export async function viewerForSession(db: Db, session: { id: string; signedInAt: number | null }): Promise<SessionViewer | null> {
+  if (!/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(session.id)) return null;
+  const row = await db
+    .selectFrom("users")
+    .select(["id", "email", "name", "role", "disabled_at", "credentials_changed_at"])
+    .where("id", "=", session.id)
+    .executeTakeFirst();
+  if (!row || row.disabled_at !== null) return null;
+  if (row.credentials_changed_at !== null && (session.signedInAt ?? 0) < row.credentials_changed_at.getTime()) return null;
+  return { id: row.id, email: row.email, name: row.name, role: row.role };
+}
+
 export async function emailTaken(db: Db, email: string): Promise<boolean> {
   const row = await db
     .selectFrom("users")

@@ -2,11 +2,12 @@ import "server-only";
 import bcrypt from "bcryptjs";
 import type { NextAuthOptions, Session } from "next-auth";
 import { getServerSession } from "next-auth";
+import { cache } from "react";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { z } from "zod";
 import type { Role } from "@/db/database";
 import { getDb } from "@/db/client";
-import { findUserForSignIn } from "@/db/users";
+import { findUserForSignIn, viewerForSession } from "@/db/users";
 
 export const credentialsSchema = z.object({
   email: z.string().trim().email("Enter the e-mail address you signed up with"),
@@ -39,6 +40,8 @@ export const authOptions: NextAuthOptions = {
       if (user) {
         token.id = user.id;
         token.role = (user as unknown as { role: Role }).role;
+        // Kept through every refresh of the token (unlike iat), so a later password change can end it.
+        token.signedInAt = Date.now();
       }
       return token;
     },
@@ -46,6 +49,7 @@ export const authOptions: NextAuthOptions = {
       if (session.user) {
         session.user.id = token.id as string;
         session.user.role = token.role as Role;
+        session.user.signedInAt = typeof token.signedInAt === "number" ? token.signedInAt : null;
       }
       return session;
     },
@@ -54,13 +58,18 @@ export const authOptions: NextAuthOptions = {
 
 export type Viewer = { id: string; name: string; email: string; role: Role };
 
-/** The signed-in person, or null. Every page, handler and action asks this itself. */
-export async function getViewer(): Promise<Viewer | null> {
+/**
+ * The signed-in person, or null. Every page, handler and action asks this
+ * itself. The token alone is not trusted for long: the account is read on each
+ * request (once: layout and page share the answer), so a disabled account or
+ * a password reset ends sessions at once.
+ */
+export const getViewer = cache(async (): Promise<Viewer | null> => {
   const session: Session | null = await getServerSession(authOptions);
   const u = session?.user;
   if (!u?.id || !u.role) return null;
-  return { id: u.id, name: u.name ?? "", email: u.email ?? "", role: u.role };
-}
+  return viewerForSession(getDb(), { id: u.id, signedInAt: u.signedInAt ?? null });
+});
 
 export function homeFor(role: Role): string {
   return role === "admin" ? "/admin" : role === "coach" ? "/coach" : "/athlete";

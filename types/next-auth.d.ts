@@ -3,7 +3,7 @@ import type { Role } from "@/db/database";
 
 declare module "next-auth" {
   interface Session {
-    user: DefaultSession["user"] & { id: string; role: Role };
+    user: DefaultSession["user"] & { id: string; role: Role; signedInAt?: number | null };
   }
 }
 
@@ -11,5 +11,7 @@ declare module "next-auth/jwt" {
   interface JWT {
     id?: string;
     role?: Role;
+    /** When this session signed in, ms since the epoch. */
+    signedInAt?: number;
   }
 }

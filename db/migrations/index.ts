@@ -10,6 +10,7 @@ import * as m0004 from "./2026-12-01T0004_athletes";
 import * as m0005 from "./2026-12-01T0005_logs";
 import * as m0006 from "./2026-12-01T0006_store";
 import * as m0007 from "./2026-12-01T0007_recipes";
+import * as m0008 from "./2026-12-02T0008_sessions";
 
 export const migrations: Record<string, Migration> = {
   "2026-12-01T0001_users": m0001,
@@ -19,4 +20,5 @@ export const migrations: Record<string, Migration> = {
   "2026-12-01T0005_logs": m0005,
   "2026-12-01T0006_store": m0006,
   "2026-12-01T0007_recipes": m0007,
+  "2026-12-02T0008_sessions": m0008,
 };

@@ -87,3 +87,39 @@ test("/api/health reports the app and the database", async ({ request }) => {
   expect(body.database.ok).toBe(true);
   expect(typeof body.database.latencyMs).toBe("number");
 });
+
+test("a password reset signs out the session already open on another device, and the new password signs in", async ({ browser }) => {
+  const email = `reset-${Date.now()}@example.test`;
+  const laptop = await (await browser.newContext()).newPage();
+  await laptop.goto("/signup");
+  await laptop.getByLabel("Your name").fill("Bea Example");
+  await laptop.getByLabel("E-mail").fill(email);
+  await laptop.getByLabel("Password").fill("first-long-secret");
+  await laptop.getByRole("button", { name: "Create coach account" }).click();
+  await expect(laptop).toHaveURL(/\/coach$/);
+
+  // From another device, ask for a link and choose a new password.
+  const phone = await (await browser.newContext()).newPage();
+  await phone.goto("/reset");
+  await phone.getByLabel("E-mail").fill(email);
+  await phone.getByRole("button", { name: "Send me a link" }).click();
+  const admin = await (await browser.newContext()).newPage();
+  await signIn(admin, "admin@larchmere.test");
+  await expect(async () => {
+    await admin.goto("/admin/mailbox");
+    await expect(admin.getByTestId("mail-message").filter({ hasText: email })).toHaveCount(1, { timeout: 1_000 });
+  }).toPass();
+  const link = await admin.getByTestId("mail-message").filter({ hasText: email }).getByTestId("mail-link").first().getAttribute("href");
+  await phone.goto(link as string);
+  await phone.getByLabel("New password").fill("second-long-secret");
+  await phone.getByLabel("Repeat the password").fill("second-long-secret");
+  await phone.getByRole("button", { name: /password/i }).click();
+  await expect(phone).toHaveURL(/\/signin\?/);
+
+  // The laptop's open session ends: pages send it to sign in, the API answers 401.
+  await laptop.goto("/coach");
+  await expect(laptop).toHaveURL(/\/signin/);
+  expect((await laptop.request.get("/api/templates")).status()).toBe(401);
+  await signIn(phone, email, "second-long-secret");
+  await expect(phone).toHaveURL(/\/coach$/);
+});

@@ -5,7 +5,7 @@ import type { Kysely } from "kysely";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { readStoredMessages } from "../../scripts/fakes/smtp.mjs";
 import type { Database } from "../../db/database";
-import { createUser } from "../../db/users";
+import { createUser, viewerForSession } from "../../db/users";
 import { type Mailbox, startMailbox } from "../support/mailbox";
 import { migratedScratchDb } from "../support/people";
 import { form } from "../support/requests";
@@ -111,6 +111,24 @@ describe("password reset", () => {
     expect(again).toMatchObject({ ok: false, closed: "used" });
     expect(await bcrypt.compare(NEW, await passwordOf(mayaId))).toBe(true);
     expect(await resets.findPasswordReset(scratch.db, token)).toEqual({ status: "used" });
+  });
+
+  it("ends sessions signed in before the reset, keeps later ones, and refuses disabled accounts", async () => {
+    const changed = (await scratch.db.selectFrom("users").select("credentials_changed_at").where("id", "=", mayaId).executeTakeFirstOrThrow()).credentials_changed_at;
+    if (!changed) throw new Error("the reset did not record the change");
+    // Signed in just before the new password was set (the previous test): no longer a viewer.
+    expect(await viewerForSession(scratch.db, { id: mayaId, signedInAt: changed.getTime() - 1 })).toBeNull();
+    expect(await viewerForSession(scratch.db, { id: mayaId, signedInAt: null })).toBeNull();
+    // Signed in with the new password afterwards: still fine, with the account's own role and name.
+    expect(await viewerForSession(scratch.db, { id: mayaId, signedInAt: Date.now() })).toMatchObject({ id: mayaId, email: "maya@larchmere.test", role: "athlete" });
+
+    const other = await createUser(scratch.db, { email: "theo@larchmere.test", name: "Theo Vance", role: "coach", passwordHash: "x" });
+    if (!other) throw new Error("user not created");
+    // Never reset: a session from before this was tracked still counts.
+    expect(await viewerForSession(scratch.db, { id: other.id, signedInAt: null })).toMatchObject({ role: "coach" });
+    await scratch.db.updateTable("users").set({ disabled_at: new Date() }).where("id", "=", other.id).execute();
+    expect(await viewerForSession(scratch.db, { id: other.id, signedInAt: Date.now() })).toBeNull();
+    expect(await viewerForSession(scratch.db, { id: "not-a-uuid", signedInAt: Date.now() })).toBeNull();
   });
 
   it("refuses an expired link", async () => {
