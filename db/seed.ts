@@ -150,13 +150,17 @@ type DemoMax = { exercise: string; value: number; daysBefore: number; source: Ma
  * habits: db/seedHistory.ts). Lena is left unassigned so the coach has
  * someone to assign on a first visit.
  */
-const DEMO_TRAINING: { email: string; preset: EquipmentPresetId; bodyweight: number; maxes: DemoMax[]; assign: boolean; habits: TrainingHabits | null }[] = [
+/** How far back history is logged: up to yesterday (on track), or only up to last week (behind this week). */
+type LoggedUntil = "yesterday" | "last week";
+
+const DEMO_TRAINING: { email: string; preset: EquipmentPresetId; bodyweight: number; maxes: DemoMax[]; assign: boolean; habits: TrainingHabits | null; logged: LoggedUntil }[] = [
   {
     email: "tomas@larchmere.test",
     preset: "kg-club",
     bodyweight: 82.5,
     assign: true,
     habits: TOMAS_HABITS,
+    logged: "yesterday",
     maxes: [
       { exercise: "back squat", value: 132.5, daysBefore: 120, source: "tested", note: "Autumn test day" },
       { exercise: "back squat", value: 140, daysBefore: 18, source: "tested", note: "Winter test day" },
@@ -176,6 +180,7 @@ const DEMO_TRAINING: { email: string; preset: EquipmentPresetId; bodyweight: num
     bodyweight: 148,
     assign: true,
     habits: MAYA_HABITS,
+    logged: "last week",
     maxes: [
       { exercise: "back squat", value: 225, daysBefore: 25, source: "tested" },
       { exercise: "bench press", value: 135, daysBefore: 25, source: "tested" },
@@ -191,6 +196,7 @@ const DEMO_TRAINING: { email: string; preset: EquipmentPresetId; bodyweight: num
     bodyweight: 64,
     assign: false,
     habits: null,
+    logged: "last week",
     maxes: [
       { exercise: "back squat", value: 85, daysBefore: 10, source: "estimated" },
       { exercise: "bench press", value: 50, daysBefore: 10, source: "estimated" },
@@ -207,8 +213,10 @@ const DEMO_TRAINING: { email: string; preset: EquipmentPresetId; bodyweight: num
  * upper/lower template is tagged with its weekday (Mon, Tue, Thu, Fri), so
  * today has a session whenever today is one of those days, and the nearest one
  * is at most two days away otherwise; no weekday list is passed because no day
- * is left untagged. Only sessions before this week's Monday are logged, so this
- * week — its Monday "Upper heavy" first — is still there to log.
+ * is left untagged. Tomas has logged everything before today, so he reads as
+ * on track whatever the weekday; Maya only up to last week (one session
+ * skipped), so she is the athlete the coach's dashboard asks about. Today's
+ * session and the rest of the block are still there to log.
  */
 async function seedTraining(db: Kysely<Database>): Promise<void> {
   const coach = await db.selectFrom("users").select(["id", "role"]).where("email", "=", "coach@larchmere.test").executeTakeFirst();
@@ -269,6 +277,6 @@ async function seedTraining(db: Kysely<Database>): Promise<void> {
     if (d.assign && version && !hasAssignment) {
       await assignTemplate(db, coach, { versionId: version.id, athleteIds: [athlete.id], startDate: start, weekdays: [] });
     }
-    if (d.assign && d.habits) await logPastTraining(db, athlete.id, d.habits, p, monday);
+    if (d.assign && d.habits) await logPastTraining(db, athlete.id, d.habits, p, d.logged === "yesterday" ? today : monday);
   }
 }
