@@ -93,6 +93,11 @@ if (vitest) {
   failed += vitest.numFailedTests ?? 0;
   // A file that fails to load has no tests to count, yet is a failure.
   failed += (vitest.testResults ?? []).filter((f) => f.status === "failed" && (f.assertionResults ?? []).length === 0).length;
+  // Every test passed yet Vitest failed the run: an error outside any test (an unhandled rejection, say).
+  if (vitestCode !== 0 && (vitest.numFailedTests ?? 0) === 0 && !(vitest.testResults ?? []).some((f) => f.status === "failed")) {
+    console.error("✗ Vitest reported errors outside the tests (see above); counted as one failure.");
+    failed += 1;
+  }
 } else if (vitestCode !== 0) {
   failed += 1;
 }

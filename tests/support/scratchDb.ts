@@ -33,7 +33,17 @@ export async function createScratchDb() {
     name,
     async drop() {
       await db.destroy();
-      await admin((c) => c.query(`drop database if exists "${name}" with (force)`));
+      await admin(async (c) => {
+        // Pools that were just told to end (this one, a queue's) close their sockets a moment later.
+        // Forcing the drop before then kills them mid-close, which their owners report as an
+        // uncaught error; give them up to two seconds first.
+        for (let i = 0; i < 40; i++) {
+          const { rows } = await c.query<{ n: string }>("select count(*) as n from pg_stat_activity where datname = $1", [name]);
+          if (Number(rows[0].n) === 0) break;
+          await new Promise((r) => setTimeout(r, 50));
+        }
+        await c.query(`drop database if exists "${name}" with (force)`);
+      });
     },
   };
 }
