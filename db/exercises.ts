@@ -368,6 +368,17 @@ export async function mediaForViewer(db: Db, actor: Actor, key: string): Promise
 export type ExerciseName = { name: string; exercise: string; builtIn: boolean; equipment: Equipment };
 
 /**
+ * The coach's own names only (as lib/load's `library` option takes them), for
+ * the athlete's coach or the coach themself.
+ *
+ * @example
+ * expandProgramme(programme, profile, { start, library: await libraryNamesFor(db, athlete) });
+ */
+export async function libraryNamesFor(db: Db, actor: Actor): Promise<{ name: string; exercise: string; equipment: Equipment }[]> {
+  return (await exerciseNamesFor(db, actor)).filter((n) => !n.builtIn).map(({ name, exercise, equipment }) => ({ name, exercise, equipment }));
+}
+
+/**
  * Every name and alias the editor should know, each with the exercise it
  * means: the built-in catalogue plus the library of the coach in charge (the
  * coach's own; an athlete's coach's). Own entries come first.

@@ -4,6 +4,7 @@ import type { ExpandDiagnostic, Session } from "../lib/load/types";
 import type { Weekday } from "../lib/notation/model";
 import type { Db } from "./athleteAccess";
 import { expansionProfile } from "./athleteProfiles";
+import { libraryNamesFor } from "./exercises";
 import { readModel } from "./templateVersions";
 
 /** The server's calendar day in UTC, "YYYY-MM-DD"; sessions on or after it count as future. */
@@ -29,9 +30,13 @@ export async function planAssignment(
 ): Promise<AssignmentPlan> {
   const version = await db.selectFrom("template_versions").select(["model", "source"]).where("id", "=", input.versionId).executeTakeFirstOrThrow();
   const programme = readModel(version.model, version.source);
-  const profile = await expansionProfile(db, input.athleteId, input.athleteName);
+  const [profile, library] = await Promise.all([
+    expansionProfile(db, input.athleteId, input.athleteName),
+    // The coach's own exercises: their equipment decides rounding, their aliases find the athlete's maxes.
+    libraryNamesFor(db, { id: input.athleteId, role: "athlete" }),
+  ]);
   const days = input.weekdays.length > 0 ? (input.weekdays as Weekday[]) : undefined;
-  return expandProgramme(programme, profile, { start: input.startDate, ...(days ? { days } : {}) });
+  return expandProgramme(programme, profile, { start: input.startDate, library, ...(days ? { days } : {}) });
 }
 
 /**

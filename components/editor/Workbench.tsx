@@ -13,7 +13,7 @@ import type { Tree } from "@lezer/common";
 import { buildProgramme, formatProgramme, LineCache, parseProgramme } from "@/lib/notation";
 import type { Diagnostic } from "@/lib/notation/model";
 import { CATALOGUE } from "@/lib/exercises/catalogue";
-import { resolveExercise } from "@/lib/exercises/resolve";
+import { exerciseResolver, type LibraryName } from "@/lib/exercises/resolve";
 import { Caution } from "../Caution";
 import { WeekPreview } from "../preview/WeekPreview";
 import { IqEditor, type IqEditorHandle } from "./IqEditor";
@@ -30,8 +30,8 @@ type Props = {
   /** Key for the local draft copy, e.g. "template:<id>" or "template:new". */
   draftKey: string;
   initialText: string;
-  /** Extra exercise names the coach's library knows (for completion and name checks). */
-  libraryNames?: readonly string[];
+  /** The coach's own exercises by every name they answer to: completion, name checks, and loads. */
+  library?: readonly LibraryName[];
   onSave(text: string): Promise<SaveState>;
   onDraft?(text: string): Promise<void>;
   saveLabel?: string;
@@ -40,7 +40,9 @@ type Props = {
 
 const CATALOGUE_NAMES = CATALOGUE.flatMap((e) => [e.name, ...e.aliases]);
 
-export function Workbench({ draftKey, initialText, libraryNames = [], onSave, onDraft, saveLabel = "Save version", toolbar }: Props) {
+const NO_LIBRARY: readonly LibraryName[] = [];
+
+export function Workbench({ draftKey, initialText, library = NO_LIBRARY, onSave, onDraft, saveLabel = "Save version", toolbar }: Props) {
   const editor = useRef<IqEditorHandle>(null);
   // The tree, when the editor gave one, is of exactly this text.
   const [source, setSource] = useState<{ text: string; tree: Tree | null }>({ text: initialText, tree: null });
@@ -51,7 +53,8 @@ export function Workbench({ draftKey, initialText, libraryNames = [], onSave, on
   const [maxes, setMaxes] = useState<Record<string, number>>(SAMPLE_MAXES_KG);
   const [draftNote, setDraftNote] = useState<string | null>(null);
   const start = useMemo(() => nextMonday(), []);
-  const known = useMemo(() => [...new Set([...CATALOGUE_NAMES, ...libraryNames])], [libraryNames]);
+  const known = useMemo(() => [...new Set([...CATALOGUE_NAMES, ...library.map((n) => n.name)])], [library]);
+  const resolve = useMemo(() => exerciseResolver(library), [library]);
 
   // Unchanged exercise lines are taken over from the last build (the model is only read here).
   const lineCache = useRef<LineCache | null>(null);
@@ -70,7 +73,7 @@ export function Workbench({ draftKey, initialText, libraryNames = [], onSave, on
   const sample = useMemo(() => sampleProfile(units, maxes), [units, maxes]);
   // While a chosen athlete loads, the preview keeps showing the sample rather than going blank.
   const profile = previewAthlete.profile ?? sample;
-  const expansion = useMemo(() => expandProgramme(programme, profile, { start, weeks: shownWeek }), [programme, profile, start, shownWeek]);
+  const expansion = useMemo(() => expandProgramme(programme, profile, { start, weeks: shownWeek, library }), [programme, profile, start, shownWeek, library]);
   const sessions = useMemo(() => expansion.sessions.filter((s) => s.weekInProgramme === shownWeek), [expansion, shownWeek]);
   const rotations = useMemo(() => {
     const m = new Map<number, string[]>();
@@ -81,8 +84,8 @@ export function Workbench({ draftKey, initialText, libraryNames = [], onSave, on
     const written = new Set<string>();
     for (const b of programme.blocks) for (const d of b.days) for (const e of d.exercises) if (e.intensity) for (const n of [...e.variations, ...e.substitutes]) written.add(n);
     // The same few names come back on many lines: resolve each spelling once.
-    return [...new Set([...written].map((n) => resolveExercise(n)?.name ?? n.toLowerCase()))];
-  }, [programme]));
+    return [...new Set([...written].map((n) => resolve(n)?.name ?? n.toLowerCase()))];
+  }, [programme, resolve]));
 
   const problems: Problem[] = useSameData(useMemo(() => {
     const fromNotation = parsed.diagnostics.map((d: Diagnostic) => ({ line: d.line, column: d.column, severity: d.severity, message: d.message }));

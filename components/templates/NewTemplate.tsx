@@ -2,14 +2,15 @@
 import { useRouter } from "next/navigation";
 import { useCallback } from "react";
 import { parseProgramme } from "@/lib/notation";
+import type { LibraryName } from "@/lib/exercises/resolve";
 import { useLibraryNames } from "../editor/useLibraryNames";
 import { Workbench, type SaveState } from "../editor/Workbench";
 import type { TemplateResponse } from "@/app/api/templates/types";
 import { api, describeFailure } from "./api";
 
 /** A template not saved yet: the first save creates it with version 1. */
-export function NewTemplate({ initialText, sample, libraryNames }: { initialText: string; sample: string | null; libraryNames: string[] }) {
-  const names = useLibraryNames(libraryNames);
+export function NewTemplate({ initialText, sample, library }: { initialText: string; sample: string | null; library: LibraryName[] }) {
+  const names = useLibraryNames(library);
   const router = useRouter();
   const onSave = useCallback(
     async (source: string): Promise<SaveState> => {
@@ -30,5 +31,5 @@ export function NewTemplate({ initialText, sample, libraryNames }: { initialText
   const onDraft = useCallback(async (source: string) => {
     await api("/api/templates/drafts/new", { method: "PUT", json: { source } });
   }, []);
-  return <Workbench draftKey="template:new" initialText={initialText} libraryNames={names} onSave={onSave} onDraft={onDraft} saveLabel="Save template" />;
+  return <Workbench draftKey="template:new" initialText={initialText} library={names} onSave={onSave} onDraft={onDraft} saveLabel="Save template" />;
 }

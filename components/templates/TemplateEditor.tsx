@@ -2,13 +2,14 @@
 import { useRouter } from "next/navigation";
 import { useCallback, useRef, useState } from "react";
 import type { SaveVersionResponse } from "@/app/api/templates/types";
+import type { LibraryName } from "@/lib/exercises/resolve";
 import { useLibraryNames } from "../editor/useLibraryNames";
 import { Workbench, type SaveState } from "../editor/Workbench";
 import { api, describeFailure } from "./api";
 
 /** The workbench for a saved template: each save is a new version; the draft follows every change. */
-export function TemplateEditor({ id, initialText, baseVersion, libraryNames }: { id: string; initialText: string; baseVersion: number | null; libraryNames: string[] }) {
-  const names = useLibraryNames(libraryNames);
+export function TemplateEditor({ id, initialText, baseVersion, library }: { id: string; initialText: string; baseVersion: number | null; library: LibraryName[] }) {
+  const names = useLibraryNames(library);
   const router = useRouter();
   const note = useRef<HTMLInputElement>(null);
   const [base, setBase] = useState(baseVersion);
@@ -35,7 +36,7 @@ export function TemplateEditor({ id, initialText, baseVersion, libraryNames }: {
     <Workbench
       draftKey={`template:${id}`}
       initialText={initialText}
-      libraryNames={names}
+      library={names}
       onSave={onSave}
       onDraft={onDraft}
       toolbar={

@@ -52,3 +52,27 @@ export function resolveExercise(name: string): CatalogueEntry | null {
 export function exerciseKey(name: string): string {
   return resolveExercise(name)?.id ?? normaliseExerciseName(name);
 }
+
+/** A name from a coach's own library: the name or alias written, the exercise it means, its equipment. */
+export type LibraryName = { name: string; exercise: string; equipment: CatalogueEntry["equipment"] };
+
+/**
+ * Name → entry over the built-in catalogue plus a coach's library. A built-in
+ * name keeps its meaning; a library name or alias resolves to its exercise,
+ * keyed like `exerciseKey` of that exercise's name, so a max filed under the
+ * exercise is found for any of its aliases.
+ *
+ * @example
+ * const resolve = exerciseResolver([{ name: "ssb", exercise: "safety bar squat", equipment: "barbell" }]);
+ * resolve("SSB"); // { id: "safety bar squat", name: "safety bar squat", aliases: [], equipment: "barbell" }
+ * resolve("rdl")?.id; // "romanian-deadlift"
+ */
+export function exerciseResolver(library: readonly LibraryName[]): (name: string) => CatalogueEntry | null {
+  if (library.length === 0) return resolveExercise;
+  const own = new Map<string, CatalogueEntry>();
+  for (const n of library) {
+    const key = normaliseExerciseName(n.name);
+    if (key && !own.has(key)) own.set(key, { id: exerciseKey(n.exercise), name: n.exercise, aliases: [], equipment: n.equipment });
+  }
+  return (name) => resolveExercise(name) ?? own.get(normaliseExerciseName(name)) ?? null;
+}

@@ -63,6 +63,25 @@ describe("expanding a programme", () => {
     expect(machine).toMatchObject({ max: null, loadNote: "no 1RM on file for machine chest press" });
   });
 
+  it("finds a max filed under a coach's own exercise for any of its aliases, and rounds to its equipment", () => {
+    const ex = exercise({ variations: ["ssb"], intensity: { kind: "percent", value: 75 } });
+    const p1 = programme([block([day([ex], { weekday: "mon" })])]);
+    const athlete1 = kgAthlete({ maxes: { "safety bar squat": 130 } });
+    const library = [
+      { name: "safety bar squat", exercise: "safety bar squat", equipment: "barbell" as const },
+      { name: "ssb", exercise: "safety bar squat", equipment: "barbell" as const },
+    ];
+    const withLibrary = expandProgramme(p1, athlete1, { start: "2027-01-04", library }).sessions[0].exercises[0];
+    // 75 % of 130 = 97.5 kg, loadable on a 20 kg bar: (97.5 − 20) / 2 = 38.75 a side (common practice: plates per side = (load − bar) / 2).
+    expect(withLibrary).toMatchObject({ name: "ssb", equipment: "barbell", max: 130 });
+    expect(withLibrary.sets[0].load).toBe(97.5);
+    expect(withLibrary.sets[0].perSide?.reduce((a, b) => a + b, 0)).toBe(38.75);
+    // Without the library the alias means nothing: no max, no load, and no number invented.
+    const without = expandProgramme(p1, athlete1, { start: "2027-01-04" }).sessions[0].exercises[0];
+    expect(without).toMatchObject({ max: null, equipment: "other" });
+    expect(without.sets[0].load).toBeNull();
+  });
+
   it("stops after --weeks and reports a bad start date instead of throwing", () => {
     expect(expandProgramme(p, athlete, { start: "2027-01-04", weeks: 1 }).sessions).toHaveLength(2);
     const bad = expandProgramme(p, athlete, { start: "2027-02-30" });

@@ -82,7 +82,7 @@ export function expandProgramme(programme: Programme, athlete: AthleteProfile, o
     report({ severity: "info", code: "short-programme", message: `the programme has only ${total} weeks`, line: null });
   }
 
-  const ctx = createContext(programme, athlete, report);
+  const ctx = createContext(programme, athlete, report, options.library);
   const { slots, notes } = scheduleWeeks(programme.blocks, options.start, options.days, weeks);
   for (const n of notes) {
     const block = programme.blocks[n.blockIndex];

@@ -22,7 +22,7 @@
  */
 import type { Exercise, LoadModel, Programme, Unit } from "../notation/model";
 import type { AthleteProfile } from "../athlete/profile";
-import { exerciseKey, resolveExercise } from "../exercises/resolve";
+import { exerciseKey, exerciseResolver, type LibraryName } from "../exercises/resolve";
 import type { CatalogueEntry, EquipmentKind } from "../exercises/catalogue";
 import { checkRepsToFailure, DOMAIN_REPS, percentOf1RM, TRUSTED_REPS } from "./models";
 import { rirOf } from "./effort";
@@ -45,6 +45,8 @@ export interface Context {
   athlete: AthleteProfile;
   /** Name as written → catalogue entry and max, looked up once per expansion. */
   movements: Map<string, Movement>;
+  /** Built-in catalogue first, then the coach's library. */
+  resolve: (name: string) => CatalogueEntry | null;
   unit: Unit;
   model: LoadModel;
   roundStep: number;
@@ -56,7 +58,7 @@ export interface Context {
  * Everything that depends on the athlete and programme but not on the week.
  * @example createContext(programme, athlete, console.warn).roundStep; // 2.5
  */
-export function createContext(programme: Programme, athlete: AthleteProfile, report: (d: ExpandDiagnostic) => void): Context {
+export function createContext(programme: Programme, athlete: AthleteProfile, report: (d: ExpandDiagnostic) => void, library: readonly LibraryName[] = []): Context {
   const maxes = new Map<string, number>();
   for (const [name, value] of Object.entries(athlete.maxes)) {
     const key = exerciseKey(name);
@@ -64,7 +66,7 @@ export function createContext(programme: Programme, athlete: AthleteProfile, rep
     if (prev !== undefined && prev !== value) report({ severity: "warning", code: "duplicate-max", message: `two maxes on file for ${name} (${prev} and ${value}); using ${prev}`, line: null });
     else maxes.set(key, value);
   }
-  return { athlete, movements: new Map(), unit: athlete.units, model: programme.model, roundStep: defaultRoundStep(athlete.units, programme.round, programme.units), maxes, report };
+  return { athlete, movements: new Map(), resolve: exerciseResolver(library), unit: athlete.units, model: programme.model, roundStep: defaultRoundStep(athlete.units, programme.round, programme.units), maxes, report };
 }
 
 function ruleFor(equipment: EquipmentKind, bodyweight: boolean, ctx: Context): RoundingRule {
@@ -86,7 +88,7 @@ function ruleFor(equipment: EquipmentKind, bodyweight: boolean, ctx: Context): R
 function movement(ctx: Context, name: string): Movement {
   let m = ctx.movements.get(name);
   if (!m) {
-    const entry = resolveExercise(name);
+    const entry = ctx.resolve(name);
     m = { entry, equipment: entry?.equipment ?? "other", max: ctx.maxes.get(entry?.id ?? exerciseKey(name)) ?? null };
     ctx.movements.set(name, m);
   }

@@ -8,6 +8,7 @@
  */
 import type { Unit, Weekday } from "../notation/model";
 import type { EquipmentKind } from "../exercises/catalogue";
+import type { LibraryName } from "../exercises/resolve";
 
 export interface SetOut {
   kind: "warmup" | "work";
@@ -91,6 +92,11 @@ export interface ExpandOptions {
   days?: Weekday[];
   /** Expand only this many programme weeks. */
   weeks?: number;
+  /**
+   * The coach's own exercises, by every name they answer to: their equipment
+   * decides the rounding, and a max filed under one is found for any alias.
+   */
+  library?: readonly LibraryName[];
 }
 
 export interface ExpandResult {

@@ -280,4 +280,17 @@ describe("athlete profile through the route handlers", () => {
     expect(firstWorkLoad(await planOf(1))).toBe(225);
     expect(firstWorkLoad(await planOf(0))).toBe(75);
   });
+
+  it("plans a line written with the coach's own alias from the max filed under that exercise, on the bar", async () => {
+    h.viewer = coach;
+    // Maya's "SSB" max (120.5 kg, entered above) is filed under the coach's "safety bar squat".
+    const template = await createTemplate(scratch.db, coach, { title: "Alias test", source: "title: Alias test\nday A mon\n  ssb 3x5 @80%\n" });
+    const plan = await planAssignment(scratch.db, { athleteId: maya.id, athleteName: maya.name, versionId: template.version.id, startDate: daysAgo(0), weekdays: [] });
+    const line = plan.sessions[0].exercises[0];
+    expect(line).toMatchObject({ name: "ssb", equipment: "barbell", max: 120.5 });
+    // 80 % of 120.5 = 96.4 kg → 97.5 kg, the nearest load a 20 kg bar and 1.25 kg change plates make (common practice, no source).
+    const work = line.sets.find((x) => x.kind === "work");
+    expect(work?.load).toBe(97.5);
+    expect(work?.perSide?.reduce((a, b) => a + b, 0)).toBe((97.5 - 20) / 2);
+  });
 });

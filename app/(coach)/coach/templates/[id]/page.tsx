@@ -26,7 +26,7 @@ export default async function TemplatePage({ params }: { params: Promise<{ id: s
   const template = await getTemplate(db, viewer, id);
   if (!template) notFound();
   const [latest, draft, names, listing] = await Promise.all([getVersion(db, viewer, id, "latest"), getDraft(db, viewer, id), exerciseNamesFor(db, viewer), getListingForTemplate(db, viewer, id)]);
-  const libraryNames = names.filter((n) => !n.builtIn).map((n) => n.name);
+  const library = names.filter((n) => !n.builtIn).map(({ name, exercise, equipment }) => ({ name, exercise, equipment }));
   // An unsaved draft newer than the latest version is what the coach was last typing.
   const text = draft && (!latest || draft.updatedAt > latest.createdAt) ? draft.source : (latest?.source ?? "");
   const versions = template.versions.map((v) => ({ number: v.number, note: v.note, createdAt: v.createdAt.toISOString(), authorName: v.authorName }));
@@ -36,7 +36,7 @@ export default async function TemplatePage({ params }: { params: Promise<{ id: s
         title={template.title}
         lead={`${latest ? `Version ${latest.number}` : "Not saved yet"}${template.archived ? " · archived" : ""}${draft && text === draft.source && latest && draft.source !== latest.source ? " · unsaved changes restored" : ""}`}
       />
-      <TemplateEditor id={id} initialText={text} baseVersion={latest?.number ?? null} libraryNames={libraryNames} />
+      <TemplateEditor id={id} initialText={text} baseVersion={latest?.number ?? null} library={library} />
       <div className="mt-8 grid gap-4 md:grid-cols-2 xl:grid-cols-4">
         <Card title="Versions">
           <VersionList templateId={id} versions={versions} />

@@ -3,7 +3,7 @@ import path from "node:path";
 import { PageTitle } from "@/components/AppShell";
 import { NewTemplate } from "@/components/templates/NewTemplate";
 import { getDb } from "@/db/client";
-import { exerciseNamesFor } from "@/db/exercises";
+import { libraryNamesFor } from "@/db/exercises";
 import { pageViewer } from "@/server/guard";
 
 export const metadata = { title: "New template" };
@@ -14,7 +14,7 @@ const SAMPLE_NAME = /^[a-z0-9-]+$/;
 
 export default async function NewTemplatePage({ searchParams }: { searchParams: Promise<{ sample?: string }> }) {
   const viewer = await pageViewer(["coach"], "/coach/templates/new");
-  const libraryNames = (await exerciseNamesFor(getDb(), viewer)).filter((n) => !n.builtIn).map((n) => n.name);
+  const library = await libraryNamesFor(getDb(), viewer);
   const { sample } = await searchParams;
   let text = BLANK;
   let used: string | null = null;
@@ -25,7 +25,7 @@ export default async function NewTemplatePage({ searchParams }: { searchParams: 
   return (
     <>
       <PageTitle title="New template" lead="Type the programme on the left; the right shows exactly what an athlete gets. Ctrl/Cmd+S saves, Shift+Alt+F tidies." />
-      <NewTemplate initialText={text} sample={used} libraryNames={libraryNames} />
+      <NewTemplate initialText={text} sample={used} library={library} />
     </>
   );
 }
