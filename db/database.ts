@@ -361,6 +361,8 @@ export interface PurchasesTable {
   created_at: CreatedAt;
   paid_at: Date | null;
   refunded_at: Date | null;
+  /** Null until the receipt e-mail has gone out. */
+  receipt_mailed_at: Date | null;
 }
 
 /** The buyer's right to their copy of a purchased version; revoked (not deleted) on refund. */

@@ -187,6 +187,25 @@ function toReceipt(r: ReceiptRow): Receipt {
   };
 }
 
+/**
+ * The receipt of a paid purchase while its e-mail has not gone out yet; null
+ * once mailed, or for a purchase that is not paid (pending, or refunded since).
+ *
+ * @example
+ * const r = await receiptToMail(db, purchaseId);
+ * if (r) { await sendReceipt(r, baseUrl); await markReceiptMailed(db, r.purchaseId); }
+ */
+export async function receiptToMail(db: Db, purchaseId: string): Promise<Receipt | null> {
+  if (!isUuid(purchaseId)) return null;
+  const row = await receiptQuery(db).where("p.id", "=", purchaseId).where("p.status", "=", "paid").where("p.receipt_mailed_at", "is", null).executeTakeFirst();
+  return row ? toReceipt(row) : null;
+}
+
+/** Records that the receipt e-mail went out. */
+export async function markReceiptMailed(db: Db, purchaseId: string): Promise<void> {
+  await db.updateTable("purchases").set({ receipt_mailed_at: new Date() }).where("id", "=", purchaseId).execute();
+}
+
 /** The buyer's paid and refunded purchases, newest first (abandoned checkouts are not receipts). */
 export async function listMyPurchases(db: Db, actor: Actor): Promise<(Receipt & { copyTemplateId: string | null })[]> {
   const rows = await receiptQuery(db).where("p.buyer_id", "=", actor.id).where("p.status", "<>", "pending").orderBy("p.paid_at", "desc").execute();

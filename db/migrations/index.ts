@@ -11,6 +11,7 @@ import * as m0005 from "./2026-12-01T0005_logs";
 import * as m0006 from "./2026-12-01T0006_store";
 import * as m0007 from "./2026-12-01T0007_recipes";
 import * as m0008 from "./2026-12-02T0008_sessions";
+import * as m0009 from "./2026-12-02T0009_receipt_mail";
 
 export const migrations: Record<string, Migration> = {
   "2026-12-01T0001_users": m0001,
@@ -21,4 +22,5 @@ export const migrations: Record<string, Migration> = {
   "2026-12-01T0006_store": m0006,
   "2026-12-01T0007_recipes": m0007,
   "2026-12-02T0008_sessions": m0008,
+  "2026-12-02T0009_receipt_mail": m0009,
 };

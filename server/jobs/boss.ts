@@ -16,6 +16,7 @@ export const PGBOSS_SCHEMA = "pgboss";
 export const QUEUES = {
   bulkAssign: "bulk-assign",
   cardPack: "card-pack",
+  receiptMail: "receipt-mail",
 } as const;
 
 /**
@@ -26,6 +27,8 @@ const QUEUE_OPTIONS: Record<string, Omit<PgBoss.Queue, "name">> = {
   [QUEUES.bulkAssign]: { retryLimit: 3, retryDelay: 15, retryBackoff: true, expireInSeconds: 30 * 60 },
   // One e-mail: a finished run is skipped on retry. The expiry stays far above render + SMTP timeouts so a slow send is never started twice.
   [QUEUES.cardPack]: { retryLimit: 3, retryDelay: 30, retryBackoff: true, expireInSeconds: 10 * 60 },
+  // A sent receipt is recorded and skipped on retry. Six tries with back-off from a minute cover about an hour of mail outage.
+  [QUEUES.receiptMail]: { retryLimit: 6, retryDelay: 60, retryBackoff: true, expireInSeconds: 5 * 60 },
 };
 
 export function bossOptions(url: string): PgBoss.ConstructorOptions {

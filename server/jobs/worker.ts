@@ -6,11 +6,13 @@ import type { Database } from "@/db/database";
 import { getBoss, QUEUES } from "./boss";
 import { type BulkAssignData, bulkAssignWorker } from "./bulkAssign";
 import { type CardPackData, cardPackWorker } from "./cardPack";
+import { type ReceiptMailData, receiptMailWorker } from "./receiptMail";
 
 /** Registers every handler on a started instance; the app and the tests go through here alike. */
 export async function registerWorkers(boss: PgBoss, db: Kysely<Database>, options: { pollingIntervalSeconds?: number } = {}): Promise<void> {
   await boss.work<BulkAssignData>(QUEUES.bulkAssign, { includeMetadata: true, batchSize: 1, ...options }, bulkAssignWorker(db));
   await boss.work<CardPackData>(QUEUES.cardPack, { includeMetadata: true, batchSize: 1, ...options }, cardPackWorker(db));
+  await boss.work<ReceiptMailData>(QUEUES.receiptMail, { includeMetadata: true, batchSize: 1, ...options }, receiptMailWorker(db));
 }
 
 type Shared = { started?: Promise<void> };

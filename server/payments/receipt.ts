@@ -1,5 +1,7 @@
 import "server-only";
-import type { Receipt } from "@/db/purchases";
+import type { Kysely } from "kysely";
+import type { Database } from "@/db/database";
+import { markReceiptMailed, type Receipt, receiptToMail } from "@/db/purchases";
 import { formatMoney } from "@/lib/money";
 import { escapeHtml } from "../mail/messages";
 import { sendMail } from "../mail/send";
@@ -49,4 +51,18 @@ export function receiptMessage(r: Receipt, baseUrl: string): { to: string; subje
 
 export async function sendReceipt(r: Receipt, baseUrl: string): Promise<void> {
   await sendMail(receiptMessage(r, baseUrl));
+}
+
+/**
+ * Mails a paid purchase's receipt unless it went out already, then records
+ * it. Throws when the mail cannot be sent, so a queued retry tries again; the
+ * only window for a second copy is a crash between the SMTP server accepting
+ * it and the record being written.
+ */
+export async function deliverReceipt(db: Kysely<Database>, purchaseId: string, baseUrl: string): Promise<"sent" | "nothing to send"> {
+  const receipt = await receiptToMail(db, purchaseId);
+  if (!receipt) return "nothing to send";
+  await sendReceipt(receipt, baseUrl);
+  await markReceiptMailed(db, purchaseId);
+  return "sent";
 }

@@ -5,14 +5,16 @@ import type { Database } from "@/db/database";
 import { applyPaymentEvent, type EventOutcome } from "@/db/webhookEvents";
 import { AppError } from "../errors";
 import { paymentsClient, requirePaymentsConfig, WEBHOOK_TOLERANCE_SECONDS } from "./client";
-import { sendReceipt } from "./receipt";
+import { getBoss } from "../jobs/boss";
+import { mailReceiptOrRetry } from "../jobs/receiptMail";
 
 /**
  * The provider's event arriving at /api/webhooks/payments: the signature is
  * checked against the raw body exactly as received (any change to the bytes,
  * another secret, or a timestamp older than the tolerance is refused), then
  * the event is applied once (db/webhookEvents.ts). A paid purchase's receipt
- * is mailed after the grant has committed.
+ * is mailed after the grant has committed, and retried from the job queue when
+ * the mail server cannot take it.
  */
 export async function receivePaymentEvent(db: Kysely<Database>, rawBody: string, signature: string | null, baseUrl: string): Promise<EventOutcome> {
   const { webhookSecret } = requirePaymentsConfig();
@@ -29,9 +31,7 @@ export async function receivePaymentEvent(db: Kysely<Database>, rawBody: string,
   }
   const object = (event.data?.object ?? {}) as unknown as Record<string, unknown>;
   const result = await applyPaymentEvent(db, { id: event.id, type: event.type, object });
-  if (result.outcome === "granted") {
-    // The purchase stands whether or not the mail goes out; the receipt is also on the purchases page.
-    await sendReceipt(result.receipt, baseUrl).catch((err: unknown) => console.error(`[ironquill] receipt for purchase ${result.purchaseId} not mailed:`, err instanceof Error ? err.message : err));
-  }
+  // The purchase stands whether or not the mail goes out; the receipt is also on the purchases page.
+  if (result.outcome === "granted") await mailReceiptOrRetry(db, getBoss, result.purchaseId, baseUrl);
   return result;
 }
