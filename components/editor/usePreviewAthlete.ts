@@ -49,16 +49,18 @@ export function usePreviewAthlete(): PreviewAthlete {
     queryFn: () => api<RosterResponse>("/api/athletes"),
     staleTime: 60_000,
   });
+  const list = roster.data?.athletes;
+  // Asked for only once the roster holds the id: a choice remembered from another account on this device is never fetched.
+  const onRoster = chosenId !== null && !!list?.some((a) => a.id === chosenId);
   const athlete = useQuery({
     queryKey: ["athlete", chosenId],
     queryFn: () => api<AthleteResponse>(`/api/athletes/${chosenId}`),
-    enabled: chosenId !== null,
+    enabled: onRoster,
     refetchOnWindowFocus: true,
     retry: (count, e) => !(e instanceof ApiFailure && e.status >= 400 && e.status < 500) && count < 2,
   });
 
   // A remembered athlete who left the roster falls back to the sample.
-  const list = roster.data?.athletes;
   useEffect(() => {
     if (chosenId && list && !list.some((a) => a.id === chosenId)) choose(null);
   }, [chosenId, list, choose]);
@@ -71,7 +73,7 @@ export function usePreviewAthlete(): PreviewAthlete {
     : null;
 
   const rosterList = useMemo(() => (list ?? []).map((a) => ({ id: a.id, name: a.name })), [list]);
-  const loading = chosenId !== null && athlete.isPending;
+  const loading = chosenId !== null && !roster.isError && !athlete.isError && (roster.isPending || athlete.isPending);
   // One object while nothing changed, so the memoised panel skips keystrokes.
   return useMemo(() => ({ roster: rosterList, chosenId, choose, profile, loading, problem }), [rosterList, chosenId, choose, profile, loading, problem]);
 }
