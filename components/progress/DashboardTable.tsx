@@ -80,7 +80,17 @@ export function DashboardTable({ rows, weekOf }: { rows: DashboardRow[]; weekOf:
         header: "Needs a look",
         cell: (c) => {
           const r = c.row.original;
-          if (r.flags.length === 0 && r.openProposals === 0) return <span className="text-sm text-moss-700">on track</span>;
+          if (r.flags.length === 0 && r.openProposals === 0) {
+            // No sessions in the last four weeks or this one: "on track" would say more than is known.
+            if (r.thisWeek.planned === 0 && r.lastFourWeeks.planned === 0) {
+              return (
+                <Link href={`/coach/athletes/${r.id}`} className="text-sm text-iron-500 underline decoration-iron-300 underline-offset-2 hover:text-ember-700" data-testid="dashboard-unplanned">
+                  nothing planned
+                </Link>
+              );
+            }
+            return <span className="text-sm text-moss-700">on track</span>;
+          }
           return (
             <span className="flex flex-wrap gap-1">
               {r.flags.map((f) => (

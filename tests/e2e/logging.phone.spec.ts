@@ -51,5 +51,9 @@ test("an athlete logs a whole session on a phone, swapping in a substitute, and 
   const tomas = coach.getByTestId("dashboard-row").filter({ hasText: "Tomas Brenner" });
   await expect(tomas).toContainText(/[1-9]\d*\/\d+/);
   await expect(tomas.getByTestId("dashboard-last-session")).not.toBeEmpty();
+  // Lena has no programme: the row says so and leads to her page, rather than calling her on track.
+  const lena = coach.getByTestId("dashboard-row").filter({ hasText: "Lena Fisk" });
+  await expect(lena.getByTestId("dashboard-unplanned")).toHaveText("nothing planned");
+  await expect(lena).not.toContainText("on track");
   await coach.close();
 });
