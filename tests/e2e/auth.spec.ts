@@ -79,6 +79,38 @@ test("an athlete cannot open the coach desk, an admin sees every account", async
   await admin.close();
 });
 
+test("an admin disables an account: its open session ends and sign-in is refused until it is enabled again", async ({ browser }) => {
+  const email = `disable-${Date.now()}@example.test`;
+  const coach = await (await browser.newContext()).newPage();
+  await coach.goto("/signup");
+  await coach.getByLabel("Your name").fill("Dara Example");
+  await coach.getByLabel("E-mail").fill(email);
+  await coach.getByLabel("Password").fill("a-long-enough-secret");
+  await coach.getByRole("button", { name: "Create coach account" }).click();
+  await expect(coach).toHaveURL(/\/coach$/);
+
+  const admin = await (await browser.newContext()).newPage();
+  await signIn(admin, "admin@larchmere.test");
+  const row = admin.getByTestId("account-row").filter({ hasText: email });
+  await row.getByRole("button", { name: "Disable Dara Example" }).click();
+  await row.getByRole("button", { name: "Disable", exact: true }).click();
+  await expect(row).toHaveAttribute("data-state", "disabled");
+
+  await coach.goto("/coach");
+  await expect(coach).toHaveURL(/\/signin/);
+  await coach.getByLabel("E-mail").fill(email);
+  await coach.getByLabel("Password").fill("a-long-enough-secret");
+  await coach.getByRole("button", { name: "Sign in" }).click();
+  await expect(coach.getByTestId("form-error")).toBeVisible();
+
+  // The admin's own row cannot be changed, so an admin never locks themself out.
+  await expect(admin.getByTestId("account-row").filter({ hasText: "admin@larchmere.test" }).getByLabel(/^Role of/)).toBeDisabled();
+  await row.getByRole("button", { name: "Enable Dara Example" }).click();
+  await expect(row).toHaveAttribute("data-state", "active");
+  await signIn(coach, email, "a-long-enough-secret");
+  await expect(coach).toHaveURL(/\/coach$/);
+});
+
 test("/api/health reports the app and the database", async ({ request }) => {
   const res = await request.get("/api/health");
   expect(res.status()).toBe(200);
