@@ -15,6 +15,15 @@ const FLAG_STYLE = {
 } as const;
 type FlagFilter = "all" | "any" | keyof typeof FLAG_TEXT;
 
+// On a phone the row keeps who, this week and what needs a look; the history columns wait for a wider screen.
+// Flags may wrap onto a second line rather than push the row past a phone's edge.
+type ColumnLook = { phoneHidden?: boolean; wraps?: boolean };
+const PHONE_HIDDEN: ColumnLook = { phoneHidden: true };
+const WRAPS: ColumnLook = { wraps: true };
+const look = (meta: unknown) => (meta ?? {}) as ColumnLook;
+const headClass = (meta: unknown) => (look(meta).phoneHidden ? "hidden sm:table-cell" : "");
+const cellClass = (meta: unknown) => `${headClass(meta)} ${look(meta).wraps ? "min-w-[7rem]" : "whitespace-nowrap"}`;
+
 function Ratio({ done, of, open = false }: { done: number; of: number; open?: boolean }) {
   if (of === 0) return <span className="text-iron-300">—</span>;
   const share = done / of;
@@ -67,17 +76,20 @@ export function DashboardTable({ rows, weekOf }: { rows: DashboardRow[]; weekOf:
       col.accessor((r) => (r.lastFourWeeks.planned ? r.lastFourWeeks.logged / r.lastFourWeeks.planned : -1), {
         id: "lastFourWeeks",
         header: "Last 4 weeks",
+        meta: PHONE_HIDDEN,
         cell: (c) => <Ratio done={c.row.original.lastFourWeeks.logged} of={c.row.original.lastFourWeeks.planned} />,
       }),
       col.accessor((r) => r.lastSession ?? "", {
         id: "lastSession",
         header: "Last session",
+        meta: PHONE_HIDDEN,
         cell: (c) => (c.row.original.lastSession ? <span data-testid="dashboard-last-session">{DATE.format(new Date(`${c.row.original.lastSession}T00:00:00Z`))}</span> : <span className="text-iron-300">never</span>),
       }),
       // Missed sessions weigh most: an athlete who stops training needs a call before a stalled lift does.
       col.accessor((r) => r.missed * 2 + (r.flags.includes("off-target") ? 3 : 0) + (r.flags.includes("stalled") ? 2 : 0) + (r.openProposals > 0 ? 1 : 0), {
         id: "attention",
         header: "Needs a look",
+        meta: WRAPS,
         cell: (c) => {
           const r = c.row.original;
           if (r.flags.length === 0 && r.openProposals === 0) {
@@ -152,7 +164,7 @@ export function DashboardTable({ rows, weekOf }: { rows: DashboardRow[]; weekOf:
                 {g.headers.map((h) => {
                   const dir = h.column.getIsSorted();
                   return (
-                    <th key={h.id} className="px-4 py-2 font-semibold whitespace-nowrap text-iron-600" aria-sort={dir === "asc" ? "ascending" : dir === "desc" ? "descending" : "none"}>
+                    <th key={h.id} className={`px-3 py-2 font-semibold whitespace-nowrap text-iron-600 sm:px-4 ${headClass(h.column.columnDef.meta)}`} aria-sort={dir === "asc" ? "ascending" : dir === "desc" ? "descending" : "none"}>
                       <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 hover:text-iron">
                         {flexRender(h.column.columnDef.header, h.getContext())}
                         <span className="text-iron-300">{dir === "asc" ? "▲" : dir === "desc" ? "▼" : "↕"}</span>
@@ -167,7 +179,7 @@ export function DashboardTable({ rows, weekOf }: { rows: DashboardRow[]; weekOf:
             {table.getRowModel().rows.map((r) => (
               <tr key={r.id} className="border-b border-chalk-100 last:border-0 hover:bg-chalk-50" data-testid="dashboard-row">
                 {r.getVisibleCells().map((c) => (
-                  <td key={c.id} className="px-4 py-3 whitespace-nowrap">
+                  <td key={c.id} className={`px-3 py-3 sm:px-4 ${cellClass(c.column.columnDef.meta)}`}>
                     {flexRender(c.column.columnDef.cell, c.getContext())}
                   </td>
                 ))}
