@@ -183,6 +183,14 @@ function invalid(field: string, message: string): DomainError {
   return new DomainError("invalid_input", `${field}: ${message}`, { [field]: message });
 }
 
+/** The input as the schema reads it, or invalid_input naming the first field at fault. */
+function checked<S extends z.ZodType>(schema: S, input: unknown): z.output<S> {
+  const parsed = schema.safeParse(input);
+  if (parsed.success) return parsed.data;
+  const issue = parsed.error.issues[0];
+  throw invalid(issue.path.join(".") || "_", issue.message);
+}
+
 function slotOf(plan: SessionPlan, index: number): ExerciseOut {
   const ex = plan.exercises[index];
   if (!ex) throw invalid("exerciseIndex", `This session has ${plan.exercises.length} exercises; pick one of them`);
@@ -257,12 +265,7 @@ export type SaveSetResult = { set: SetLog; stale: boolean };
  * await saveSet(db, athlete, sessionId, { exerciseIndex: 0, setIndex: 3, reps: 5, load: 100, rir: 2, done: true });
  */
 export async function saveSet(db: Db, actor: Actor, sessionId: string, input: SetLogInput): Promise<SaveSetResult> {
-  const parsed = setLogSchema.safeParse(input);
-  if (!parsed.success) {
-    const issue = parsed.error.issues[0];
-    throw invalid(issue.path.join(".") || "_", issue.message);
-  }
-  const v = parsed.data;
+  const v = checked(setLogSchema, input);
   return inTransaction(db, async (trx) => {
     const { row } = await writable(trx, actor, sessionId);
     const ex = slotOf(row.plan, v.exerciseIndex);
@@ -344,12 +347,7 @@ export async function saveSet(db: Db, actor: Actor, sessionId: string, input: Se
  * await saveExerciseLog(db, athlete, sessionId, { exerciseIndex: 3, exercise: "machine row", note: "cable station busy" });
  */
 export async function saveExerciseLog(db: Db, actor: Actor, sessionId: string, input: ExerciseLogInput): Promise<ExerciseLog> {
-  const parsed = exerciseLogSchema.safeParse(input);
-  if (!parsed.success) {
-    const issue = parsed.error.issues[0];
-    throw invalid(issue.path.join(".") || "_", issue.message);
-  }
-  const v = parsed.data;
+  const v = checked(exerciseLogSchema, input);
   return inTransaction(db, async (trx) => {
     const { row } = await writable(trx, actor, sessionId);
     const ex = slotOf(row.plan, v.exerciseIndex);

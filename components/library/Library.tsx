@@ -9,6 +9,7 @@ import { api } from "@/components/templates/api";
 import { ExerciseEditor } from "./ExerciseEditor";
 import { ExerciseForm } from "./ExerciseForm";
 import { SidePanel } from "./SidePanel";
+import { SortableHead } from "../SortableHead";
 
 const PAGE_SIZE = 25;
 const SORTABLE = new Set(["name", "equipment", "pattern"]);
@@ -154,22 +155,9 @@ export function Library({ initial, addName }: { initial: LibraryResponse; addNam
                 <thead className="border-b border-chalk-200 bg-chalk-50 text-xs uppercase tracking-wider text-iron-400">
                   {table.getHeaderGroups().map((hg) => (
                     <tr key={hg.id}>
-                      {hg.headers.map((header) => {
-                        const sortable = SORTABLE.has(header.column.id);
-                        const dir = header.column.getIsSorted();
-                        return (
-                          <th key={header.id} scope="col" className="whitespace-nowrap px-4 py-2.5 font-semibold" aria-sort={dir ? (dir === "asc" ? "ascending" : "descending") : undefined}>
-                            {sortable ? (
-                              <button type="button" className="inline-flex items-center gap-1 uppercase hover:text-iron" onClick={header.column.getToggleSortingHandler()}>
-                                {flexRender(header.column.columnDef.header, header.getContext())}
-                                <span aria-hidden="true" className={dir ? "text-ember" : "text-iron-200"}>{dir === "desc" ? "▼" : "▲"}</span>
-                              </button>
-                            ) : (
-                              flexRender(header.column.columnDef.header, header.getContext())
-                            )}
-                          </th>
-                        );
-                      })}
+                      {hg.headers.map((header) => (
+                        <SortableHead key={header.id} header={header} sortable={SORTABLE.has(header.column.id)} />
+                      ))}
                     </tr>
                   ))}
                 </thead>

@@ -5,6 +5,7 @@ import { useMemo, useState } from "react";
 import type { RefundResponse, SaleRow, SalesResponse } from "@/app/api/store/types";
 import { api, describeFailure } from "@/components/templates/api";
 import { dayText, formatMoney, monthText } from "./format";
+import { SortableHead } from "../SortableHead";
 
 const col = createColumnHelper<SaleRow>();
 
@@ -142,21 +143,9 @@ export function SalesTable({ initial, showSeller = false }: { initial: SalesResp
               <thead className="border-b border-chalk-200 bg-chalk-50 text-xs uppercase tracking-wider text-iron-400">
                 {table.getHeaderGroups().map((hg) => (
                   <tr key={hg.id}>
-                    {hg.headers.map((header) => {
-                      const dir = header.column.getIsSorted();
-                      return (
-                        <th key={header.id} scope="col" className="whitespace-nowrap px-4 py-2.5 font-semibold" aria-sort={dir ? (dir === "asc" ? "ascending" : "descending") : undefined}>
-                          {header.column.getCanSort() ? (
-                            <button type="button" className="inline-flex items-center gap-1 uppercase hover:text-iron" onClick={header.column.getToggleSortingHandler()}>
-                              {flexRender(header.column.columnDef.header, header.getContext())}
-                              <span aria-hidden="true" className={dir ? "text-ember" : "text-iron-200"}>{dir === "desc" ? "▼" : "▲"}</span>
-                            </button>
-                          ) : (
-                            flexRender(header.column.columnDef.header, header.getContext())
-                          )}
-                        </th>
-                      );
-                    })}
+                    {hg.headers.map((header) => (
+                      <SortableHead key={header.id} header={header} />
+                    ))}
                   </tr>
                 ))}
               </thead>
