@@ -2,7 +2,7 @@ import "server-only";
 import { sql } from "kysely";
 import { addDays } from "../lib/dates/date";
 import { attentionFor, isoMonday, sessionBests, type Flag } from "../lib/progress";
-import type { Actor, Db } from "./athleteAccess";
+import { type Actor, type Db, listRoster } from "./athleteAccess";
 import { getEquipment } from "./athleteProfiles";
 import { DomainError } from "./domainError";
 import { loadLoggedSets } from "./progress";
@@ -46,14 +46,7 @@ export async function coachDashboard(db: Db, actor: Actor, options: { today?: st
   const monday = isoMonday(today);
   const from = addDays(monday, -28);
   const to = addDays(monday, 6);
-  const athletes = await db
-    .selectFrom("users")
-    .select(["id", "name", "email"])
-    .where("coach_id", "=", actor.id)
-    .where("role", "=", "athlete")
-    .where("disabled_at", "is", null)
-    .orderBy("name")
-    .execute();
+  const athletes = await listRoster(db, actor);
   if (athletes.length === 0) return { today, weekOf: monday, rows: [] };
   const ids = athletes.map((a) => a.id);
   const [sessions, last, proposals] = await Promise.all([

@@ -82,14 +82,3 @@ export async function listUsers(db: Db, actor: { role: Role }): Promise<UserSumm
     .execute();
   return rows.map((r) => ({ id: r.id, email: r.email, name: r.name, role: r.role, createdAt: r.created_at, disabled: r.disabled_at !== null }));
 }
-
-/** The athletes a coach looks after, by name. */
-export async function listAthletesOfCoach(db: Db, coachId: string): Promise<{ id: string; name: string; email: string }[]> {
-  return db
-    .selectFrom("users")
-    .select(["id", "name", "email"])
-    .where("coach_id", "=", coachId)
-    .where("role", "=", "athlete")
-    .orderBy("name")
-    .execute();
-}

@@ -3,14 +3,14 @@ import { PageTitle } from "@/components/AppShell";
 import { AssignPanel } from "@/components/assignments/AssignPanel";
 import { EmptyState } from "@/components/EmptyState";
 import { getDb } from "@/db/client";
-import { listAthletesOfCoach } from "@/db/users";
+import { listRoster } from "@/db/athleteAccess";
 import { pageViewer } from "@/server/guard";
 
 export const metadata = { title: "Assign a template" };
 
 export default async function AssignPage() {
   const viewer = await pageViewer(["coach"], "/coach/assign");
-  const athletes = await listAthletesOfCoach(getDb(), viewer.id);
+  const athletes = await listRoster(getDb(), viewer);
   return (
     <>
       <PageTitle title="Assign a template" lead="Pick athletes and a template version; each athlete gets their own dated sessions, worked from their maxes and plates." />

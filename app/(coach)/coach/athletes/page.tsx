@@ -6,7 +6,7 @@ import { InvitationList } from "@/components/invitations/InvitationList";
 import { InviteForm } from "@/components/invitations/InviteForm";
 import { getDb } from "@/db/client";
 import { listInvitations } from "@/db/invitations";
-import { listAthletesOfCoach } from "@/db/users";
+import { listRoster } from "@/db/athleteAccess";
 import { pageViewer } from "@/server/guard";
 
 export const metadata = { title: "Athletes" };
@@ -14,7 +14,7 @@ export const metadata = { title: "Athletes" };
 export default async function AthletesPage() {
   const viewer = await pageViewer(["coach"], "/coach/athletes");
   const db = getDb();
-  const [athletes, invitations] = await Promise.all([listAthletesOfCoach(db, viewer.id), listInvitations(db, viewer)]);
+  const [athletes, invitations] = await Promise.all([listRoster(db, viewer), listInvitations(db, viewer)]);
   return (
     <>
       <PageTitle title="Athletes" lead="The people you coach, their maxes, their plates and how their training is going." />
